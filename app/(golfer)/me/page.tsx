@@ -1,0 +1,50 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { SignOutButton } from "@/components/auth/sign-out-button";
+import { PrivacyNote } from "@/components/layout/privacy-note";
+import { requirePageActor } from "@/lib/server/access";
+import { listFittingsOfGolfer } from "@/lib/server/dal/fittings";
+import { getGolfer } from "@/lib/server/dal/golfers";
+import { listSpecsOfGolfer } from "@/lib/server/dal/specs";
+
+export const metadata: Metadata = { title: "My fittings" };
+
+export default async function GolferHome() {
+  const actor = await requirePageActor();
+  if (actor.role !== "golfer" || !actor.golferId) notFound();
+  const [golfer, fittings, specs] = await Promise.all([
+    getGolfer(actor, actor.golferId),
+    listFittingsOfGolfer(actor, actor.golferId),
+    listSpecsOfGolfer(actor, actor.golferId),
+  ]);
+  const current = specs.find((s) => !s.supersededAt);
+  return (
+    <main className="mx-auto flex max-w-xl flex-col gap-6 p-4">
+      <header className="flex items-center justify-between">
+        <p className="text-label font-semibold uppercase tracking-widest text-signal-dark">Fitframe</p>
+        <SignOutButton />
+      </header>
+      <h1 className="text-title">Hello, {golfer.name.split(" ")[0]}</h1>
+      <section className="card" aria-labelledby="spec-heading">
+        <h2 id="spec-heading" className="field-label">Your putter spec</h2>
+        <p className="text-slate-600">{current ? `Issued ${current.issuedAt.toLocaleDateString("en-GB")}` : "No spec issued yet."}</p>
+      </section>
+      <section className="card" aria-labelledby="fittings-heading">
+        <h2 id="fittings-heading" className="field-label">Your fittings</h2>
+        {fittings.length === 0 ? (
+          <p className="text-slate-600">No fittings yet.</p>
+        ) : (
+          <ul className="divide-y divide-chalk-200">
+            {fittings.map((f) => (
+              <li key={f.id} className="flex min-h-touch items-center justify-between">
+                <span className="num">{f.scheduledAt.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })}</span>
+                <span className="text-label text-slate-600">{f.status === "completed" ? "done" : f.status === "planned" ? "booked" : "in progress"}</span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
+      <PrivacyNote />
+    </main>
+  );
+}

@@ -1,0 +1,9 @@
+import { createGolfer, listGolfers } from "@/lib/server/dal/golfers";
+import { apiRoute, created } from "@/lib/server/http/route";
+import { golferCreateSchema, golferListQuery } from "@/lib/schemas/golfer";
+
+// GET /api/golfers?q=&limit=&offset= — the golfers the actor may see, by name.
+export const GET = apiRoute({ query: golferListQuery }, ({ actor, query }) => listGolfers(actor, query));
+
+// POST /api/golfers — add a golfer to the actor's studio.
+export const POST = apiRoute({ body: golferCreateSchema }, async ({ actor, body }) => created(await createGolfer(actor, body)));

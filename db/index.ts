@@ -1,0 +1,14 @@
+// One pool per process. Imported by the web server (through lib/server), the worker and scripts.
+import { drizzle } from "drizzle-orm/node-postgres";
+import { Pool } from "pg";
+import { env } from "@/lib/config/env";
+import * as schema from "./schema";
+
+const globalForDb = globalThis as unknown as { fitframePool?: Pool };
+
+export const pool = globalForDb.fitframePool ?? new Pool({ connectionString: env().DATABASE_URL, max: 10 });
+globalForDb.fitframePool = pool;
+
+export const db = drizzle(pool, { schema });
+export type Db = typeof db;
+export { schema };

@@ -1,0 +1,250 @@
+// Fitframe's tables. Every row that belongs to a studio carries studio_id so that every
+// query can be scoped to the actor's studio (see lib/server/access).
+import { sql } from "drizzle-orm";
+import {
+  bigint, boolean, doublePrecision, index, integer, jsonb, pgEnum, pgTable, primaryKey, real,
+  text, timestamp, uniqueIndex, uuid,
+} from "drizzle-orm/pg-core";
+
+export const roleEnum = pgEnum("role", ["admin", "fitter", "coach", "golfer"]);
+export const handednessEnum = pgEnum("handedness", ["right", "left"]);
+export const fittingStatusEnum = pgEnum("fitting_status", ["planned", "in_progress", "completed"]);
+export const viewEnum = pgEnum("clip_view", ["overhead", "face-on", "down-the-line"]);
+export const clipStateEnum = pgEnum("clip_state", ["awaiting_upload", "queued", "processing", "ready", "failed"]);
+export const markKindEnum = pgEnum("mark_kind", ["point", "line", "angle", "scale", "plane"]);
+export const markRoleEnum = pgEnum("mark_role", [
+  "face", "target", "path", "shaft", "sole", "ground", "ball", "clubhead", "marker",
+]);
+export const measurementMethodEnum = pgEnum("measurement_method", ["manual", "derived", "suggested"]);
+
+const timestamps = {
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+};
+
+export type StudioSettings = {
+  units: "ft" | "m";
+  frictionMu: number;
+  windows: Record<string, { min: number; max: number }>;
+  cameraFps: Record<"overhead" | "face-on" | "down-the-line", number>;
+};
+
+export const studios = pgTable("studios", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  name: text("name").notNull(),
+  slug: text("slug").notNull().unique(),
+  timeZone: text("time_zone").notNull().default("UTC"),
+  settings: jsonb("settings").$type<StudioSettings>().notNull(),
+  ...timestamps,
+});
+
+export const users = pgTable("users", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  email: text("email").notNull(),
+  name: text("name").notNull(),
+  role: roleEnum("role").notNull(),
+  passwordHash: text("password_hash"),
+  disabled: boolean("disabled").notNull().default(false),
+  // Bumped on a role change, a disable or a password change: older sessions stop working at once.
+  sessionVersion: integer("session_version").notNull().default(1),
+  ...timestamps,
+}, (t) => [
+  uniqueIndex("users_email_key").on(sql`lower(${t.email})`),
+  index("users_studio_role_idx").on(t.studioId, t.role, t.name),
+]);
+
+export const apiTokens = pgTable("api_tokens", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  name: text("name").notNull(),
+  tokenHash: text("token_hash").notNull().unique(),
+  lastUsedAt: timestamp("last_used_at", { withTimezone: true }),
+  revokedAt: timestamp("revoked_at", { withTimezone: true }),
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [index("api_tokens_user_idx").on(t.userId, t.createdAt)]);
+
+export const signInFailures = pgTable("sign_in_failures", {
+  id: bigint("id", { mode: "number" }).primaryKey().generatedAlwaysAsIdentity(),
+  email: text("email").notNull(),
+  ip: text("ip").notNull(),
+  at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [index("sign_in_failures_lookup_idx").on(t.email, t.ip, t.at)]);
+
+export type GolferIntake = {
+  puttingStyle?: string;
+  usualMiss?: string;
+  ball?: string;
+  currentPutter?: { headStyle?: string; lengthIn?: number; lieDeg?: number; loftDeg?: number; grip?: string };
+  greenSpeedFt?: number;
+  heightCm?: number;
+  notes?: string;
+};
+
+export const golfers = pgTable("golfers", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  userId: uuid("user_id").unique().references(() => users.id, { onDelete: "set null" }),
+  name: text("name").notNull(),
+  email: text("email"),
+  handedness: handednessEnum("handedness").notNull().default("right"),
+  isMinor: boolean("is_minor").notNull().default(false),
+  intake: jsonb("intake").$type<GolferIntake>().notNull().default({}),
+  videoConsentAt: timestamp("video_consent_at", { withTimezone: true }),
+  videoConsentBy: text("video_consent_by"),
+  ...timestamps,
+}, (t) => [
+  index("golfers_studio_name_idx").on(t.studioId, t.name),
+  index("golfers_studio_updated_idx").on(t.studioId, t.updatedAt),
+]);
+
+export const coachGolfers = pgTable("coach_golfers", {
+  coachUserId: uuid("coach_user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  golferId: uuid("golfer_id").notNull().references(() => golfers.id, { onDelete: "cascade" }),
+  grantedAt: timestamp("granted_at", { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [primaryKey({ columns: [t.coachUserId, t.golferId] }), index("coach_golfers_golfer_idx").on(t.golferId)]);
+
+export const fittings = pgTable("fittings", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  golferId: uuid("golfer_id").notNull().references(() => golfers.id, { onDelete: "cascade" }),
+  fitterUserId: uuid("fitter_user_id").references(() => users.id, { onDelete: "set null" }),
+  scheduledAt: timestamp("scheduled_at", { withTimezone: true }).notNull(),
+  status: fittingStatusEnum("status").notNull().default("planned"),
+  notes: text("notes").notNull().default(""),
+  consentConfirmedAt: timestamp("consent_confirmed_at", { withTimezone: true }),
+  ...timestamps,
+}, (t) => [
+  index("fittings_studio_scheduled_idx").on(t.studioId, t.scheduledAt),
+  index("fittings_golfer_scheduled_idx").on(t.golferId, t.scheduledAt),
+]);
+
+export const builds = pgTable("builds", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  fittingId: uuid("fitting_id").notNull().references(() => fittings.id, { onDelete: "cascade" }),
+  position: integer("position").notNull(),
+  label: text("label").notNull(),
+  isBaseline: boolean("is_baseline").notNull().default(false),
+  headModel: text("head_model").notNull().default(""),
+  neckStyle: text("neck_style").notNull().default(""),
+  lengthIn: real("length_in"),
+  lieDeg: real("lie_deg"),
+  loftDeg: real("loft_deg"),
+  offsetIn: real("offset_in"),
+  toeHang: text("toe_hang").notNull().default(""),
+  headMassG: real("head_mass_g"),
+  gripName: text("grip_name").notNull().default(""),
+  gripMassG: real("grip_mass_g"),
+  shaftMassG: real("shaft_mass_g"),
+  balancePointIn: real("balance_point_in"),
+  alignmentAid: text("alignment_aid").notNull().default(""),
+  notes: text("notes").notNull().default(""),
+  ...timestamps,
+}, (t) => [index("builds_fitting_position_idx").on(t.fittingId, t.position)]);
+
+export const strokes = pgTable("strokes", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  buildId: uuid("build_id").notNull().references(() => builds.id, { onDelete: "cascade" }),
+  position: integer("position").notNull(),
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [index("strokes_build_position_idx").on(t.buildId, t.position)]);
+
+export const clips = pgTable("clips", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  fittingId: uuid("fitting_id").notNull().references(() => fittings.id, { onDelete: "cascade" }),
+  buildId: uuid("build_id").notNull().references(() => builds.id, { onDelete: "cascade" }),
+  strokeId: uuid("stroke_id").references(() => strokes.id, { onDelete: "set null" }),
+  view: viewEnum("view").notNull(),
+  state: clipStateEnum("state").notNull().default("awaiting_upload"),
+  failureReason: text("failure_reason"),
+  progress: integer("progress").notNull().default(0),
+  originalName: text("original_name").notNull(),
+  contentType: text("content_type").notNull(),
+  sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
+  objectKey: text("object_key").notNull(),
+  captureFps: real("capture_fps").notNull(),
+  slowMotionFactor: real("slow_motion_factor").notNull().default(8),
+  mirrored: boolean("mirrored").notNull().default(false),
+  width: integer("width"),
+  height: integer("height"),
+  frameCount: integer("frame_count"),
+  durationS: doublePrecision("duration_s"),
+  codec: text("codec"),
+  rotation: integer("rotation"),
+  containerFps: doublePrecision("container_fps"),
+  motionSignal: jsonb("motion_signal").$type<number[]>(),
+  suggestedImpactFrame: integer("suggested_impact_frame"),
+  addressFrame: integer("address_frame"),
+  takeawayFrame: integer("takeaway_frame"),
+  topFrame: integer("top_frame"),
+  impactFrame: integer("impact_frame"),
+  finishFrame: integer("finish_frame"),
+  createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+  ...timestamps,
+}, (t) => [
+  index("clips_build_created_idx").on(t.buildId, t.createdAt),
+  index("clips_fitting_created_idx").on(t.fittingId, t.createdAt),
+  index("clips_studio_state_updated_idx").on(t.studioId, t.state, t.updatedAt),
+  uniqueIndex("clips_stroke_view_key").on(t.strokeId, t.view),
+]);
+
+export type Point2 = [number, number];
+
+export const marks = pgTable("marks", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  clipId: uuid("clip_id").notNull().references(() => clips.id, { onDelete: "cascade" }),
+  frame: integer("frame").notNull(),
+  kind: markKindEnum("kind").notNull(),
+  role: markRoleEnum("role").notNull(),
+  points: jsonb("points").$type<Point2[]>().notNull(),
+  lengthMm: real("length_mm"),
+  widthMm: real("width_mm"),
+  heightMm: real("height_mm"),
+  authorUserId: uuid("author_user_id").references(() => users.id, { onDelete: "set null" }),
+  version: integer("version").notNull().default(1),
+  ...timestamps,
+}, (t) => [index("marks_clip_frame_idx").on(t.clipId, t.frame)]);
+
+export const measurements = pgTable("measurements", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  clipId: uuid("clip_id").notNull().references(() => clips.id, { onDelete: "cascade" }),
+  key: text("key").notNull(),
+  value: doublePrecision("value"),
+  unit: text("unit").notNull(),
+  frames: jsonb("frames").$type<number[]>().notNull().default([]),
+  markIds: jsonb("mark_ids").$type<string[]>().notNull().default([]),
+  needs: jsonb("needs").$type<string[]>().notNull().default([]),
+  method: measurementMethodEnum("method").notNull().default("derived"),
+  computedBy: uuid("computed_by").references(() => users.id, { onDelete: "set null" }),
+  computedAt: timestamp("computed_at", { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [uniqueIndex("measurements_clip_key").on(t.clipId, t.key)]);
+
+export const comments = pgTable("comments", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  clipId: uuid("clip_id").notNull().references(() => clips.id, { onDelete: "cascade" }),
+  parentId: uuid("parent_id"),
+  authorUserId: uuid("author_user_id").references(() => users.id, { onDelete: "set null" }),
+  frame: integer("frame").notNull(),
+  body: text("body").notNull(),
+  resolvedAt: timestamp("resolved_at", { withTimezone: true }),
+  ...timestamps,
+}, (t) => [index("comments_clip_frame_idx").on(t.clipId, t.frame), index("comments_parent_idx").on(t.parentId)]);
+
+export const specs = pgTable("specs", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  golferId: uuid("golfer_id").notNull().references(() => golfers.id, { onDelete: "cascade" }),
+  fittingId: uuid("fitting_id").notNull().references(() => fittings.id, { onDelete: "cascade" }),
+  buildId: uuid("build_id").references(() => builds.id, { onDelete: "set null" }),
+  supersededAt: timestamp("superseded_at", { withTimezone: true }),
+  issuedBy: uuid("issued_by").references(() => users.id, { onDelete: "set null" }),
+  issuedAt: timestamp("issued_at", { withTimezone: true }).notNull().defaultNow(),
+  // A frozen copy: once issued, a spec is never edited; a new spec supersedes it.
+  data: jsonb("data").$type<Record<string, unknown>>().notNull(),
+}, (t) => [index("specs_golfer_issued_idx").on(t.golferId, t.issuedAt)]);

@@ -1,0 +1,27 @@
+import type { Vec2 } from "@/lib/geometry/vector";
+
+export const VIEWS = ["overhead", "face-on", "down-the-line"] as const;
+export type View = (typeof VIEWS)[number];
+
+export const MARK_KINDS = ["point", "line", "angle", "scale", "plane"] as const;
+export type MarkKind = (typeof MARK_KINDS)[number];
+
+export const MARK_ROLES = ["face", "target", "path", "shaft", "sole", "ground", "ball", "clubhead", "marker"] as const;
+export type MarkRole = (typeof MARK_ROLES)[number];
+
+/** Number of points each kind carries (METRICS.md, "Marks"). */
+export const POINTS_PER_KIND: Record<MarkKind, number> = { point: 1, line: 2, angle: 3, scale: 2, plane: 4 };
+
+export type MarkInput = {
+  frame: number;
+  kind: MarkKind;
+  role: MarkRole;
+  points: Vec2[];
+  lengthMm?: number;
+  widthMm?: number;
+  heightMm?: number;
+};
+
+export type StoredMark = MarkInput & { id: string };
+
+export type ClipFrameInfo = { width: number; height: number; frameCount: number; view: View };

@@ -1,0 +1,66 @@
+import "server-only";
+import { and, asc, desc, eq, gte, lt } from "drizzle-orm";
+import type { z } from "zod";
+import { db, schema } from "@/db";
+import type { fittingCreateSchema, fittingUpdateSchema } from "@/lib/schemas/fitting";
+import { assertGolfer, assertStudio, type SignedInActor } from "../access";
+import { notFound } from "../http/errors";
+import { getGolfer } from "./golfers";
+
+const { fittings, builds, golfers } = schema;
+
+async function loadFitting(actor: SignedInActor, id: string) {
+  const [row] = await db.select().from(fittings).where(eq(fittings.id, id));
+  if (!row) throw notFound("No such fitting");
+  await assertGolfer(actor, "golfer.read", { studioId: row.studioId, golferId: row.golferId }, "No such fitting");
+  return row;
+}
+
+export async function getFitting(actor: SignedInActor, id: string) {
+  const fitting = await loadFitting(actor, id);
+  const buildRows = await db.select().from(builds).where(eq(builds.fittingId, id)).orderBy(asc(builds.position));
+  return { ...fitting, builds: buildRows };
+}
+
+/** For writes below a fitting (builds, clips): the fitting, once the actor may change it. */
+export async function fittingForWrite(actor: SignedInActor, id: string) {
+  const fitting = await loadFitting(actor, id);
+  await assertGolfer(actor, "golfer.write", { studioId: fitting.studioId, golferId: fitting.golferId });
+  return fitting;
+}
+
+export async function listFittingsOfGolfer(actor: SignedInActor, golferId: string) {
+  await getGolfer(actor, golferId);
+  return db.select().from(fittings).where(eq(fittings.golferId, golferId)).orderBy(desc(fittings.scheduledAt));
+}
+
+export async function createFitting(actor: SignedInActor, input: z.infer<typeof fittingCreateSchema>) {
+  const golfer = await getGolfer(actor, input.golferId);
+  await assertGolfer(actor, "golfer.write", { studioId: golfer.studioId, golferId: golfer.id });
+  const [row] = await db
+    .insert(fittings)
+    .values({ studioId: golfer.studioId, golferId: golfer.id, fitterUserId: actor.userId, scheduledAt: input.scheduledAt, notes: input.notes })
+    .returning();
+  return row!;
+}
+
+export async function updateFitting(actor: SignedInActor, id: string, input: z.infer<typeof fittingUpdateSchema>) {
+  const fitting = await fittingForWrite(actor, id);
+  const [row] = await db
+    .update(fittings)
+    .set({ ...input, updatedAt: new Date() })
+    .where(and(eq(fittings.id, id), eq(fittings.studioId, fitting.studioId)))
+    .returning();
+  return row!;
+}
+
+/** The studio home's list: the day's fittings with each golfer's name. */
+export async function listStudioFittingsBetween(actor: SignedInActor, from: Date, to: Date) {
+  assertStudio(actor, "golfers.create");
+  return db
+    .select({ fitting: fittings, golferName: golfers.name })
+    .from(fittings)
+    .innerJoin(golfers, eq(golfers.id, fittings.golferId))
+    .where(and(eq(fittings.studioId, actor.studioId), gte(fittings.scheduledAt, from), lt(fittings.scheduledAt, to)))
+    .orderBy(asc(fittings.scheduledAt));
+}
