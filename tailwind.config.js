@@ -1,6 +1,6 @@
 // Fitframe's look: a calm instrument. Light studio pages, a dark review stage, one warm accent.
 /** @type {import('tailwindcss').Config} */
-export default {
+const config = {
   content: ["./app/**/*.{ts,tsx}", "./components/**/*.{ts,tsx}"],
   theme: {
     extend: {
@@ -30,3 +30,5 @@ export default {
     },
   },
 };
+
+export default config;
