@@ -1,4 +1,6 @@
-// One pool per process. Imported by the web server (through lib/server), the worker and scripts.
+// One pool per process, on the server only: the web app, the worker and scripts (the last two
+// run with `--conditions=react-server`, where the server-only fence resolves to nothing).
+import "server-only";
 import { drizzle } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
 import { env } from "@/lib/config/env";

@@ -48,7 +48,7 @@ start_object_store "$S3_PORT" "$S3_BUCKET" "$NEXTAUTH_URL"
 start_mail_catcher
 log "building the web app"
 node node_modules/next/dist/bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -60 "$DATA_DIR/build.log"; exit 1; }
-spawn worker node --import tsx workers/index.ts
+spawn worker node --conditions=react-server --import tsx workers/index.ts
 spawn web node node_modules/next/dist/bin/next start -p "$WEB_PORT" -H 127.0.0.1
 wait_for_port "$WEB_PORT" web
 
