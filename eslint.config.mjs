@@ -4,7 +4,7 @@ import nextTs from "eslint-config-next/typescript";
 const config = [
   ...nextVitals,
   ...nextTs,
-  { ignores: ["node_modules/**", ".next/**", "data/**", "db/migrations/**", "tests/.tmp/**", "next-env.d.ts"] },
+  { ignores: ["node_modules/**", ".next/**", ".next-*/**", "data/**", "db/migrations/**", "tests/.tmp/**", "next-env.d.ts"] },
 ];
 
 export default config;
