@@ -24,6 +24,8 @@ export S3_ENDPOINT="http://127.0.0.1:$S3_PORT" S3_PUBLIC_ENDPOINT="http://127.0.
 export S3_REGION=us-east-1 S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_FORCE_PATH_STYLE=true
 export SMTP_HOST=127.0.0.1 SMTP_SECURE=false MAIL_FROM="Fitframe <no-reply@fitframe.test>"
 export MAIL_URL="http://127.0.0.1:$MAIL_HTTP_PORT"
+# Short job expiry and maintenance so the killed-worker test sees its retry in seconds.
+export CLIP_JOB_EXPIRE_S=30 PGBOSS_MAINTENANCE_S=2
 export TMPDIR="$DATA_DIR/tmp"
 
 ensure_debian_packages

@@ -2,20 +2,26 @@
 // one database; each job is taken by one worker at a time.
 import PgBoss from "pg-boss";
 import { env } from "@/lib/config/env";
-import { registerJobs } from "./jobs";
+import { registerJobs, running } from "./jobs";
 
-const boss = new PgBoss({ connectionString: env().DATABASE_URL, schema: "pgboss" });
+const boss = new PgBoss({
+  connectionString: env().DATABASE_URL,
+  schema: "pgboss",
+  // How often expired jobs (a worker that died mid-job) are found and retried.
+  maintenanceIntervalSeconds: Number(process.env.PGBOSS_MAINTENANCE_S ?? 60),
+});
 boss.on("error", (err) => console.error("pg-boss error:", err.message));
 
 await boss.start();
-await registerJobs(boss);
+await registerJobs(boss, env().WORKER_CONCURRENCY);
 console.log(`worker ready (pid ${process.pid})`);
 
 let stopping = false;
 async function shutdown() {
   if (stopping) return;
   stopping = true;
-  // Unfinished jobs go back to the queue and are retried by this or another worker.
+  // Kill running ffmpeg at once; the jobs go back to the queue and are retried later.
+  for (const controller of running) controller.abort();
   await boss.stop({ graceful: true, timeout: 10_000 });
   process.exit(0);
 }

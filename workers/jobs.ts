@@ -1,7 +1,31 @@
 // The queues this worker serves. Each job is a name, a zod payload and a handler that is
-// safe to run twice. The clip pipeline adds its queue here.
+// safe to run twice.
 import type PgBoss from "pg-boss";
+import { CLIP_PROCESS_QUEUE, clipProcessPayload, clipProcessPolicy } from "@/lib/jobs/clip-process";
+import { runClipJob } from "./clip-job";
 
-export async function registerJobs(boss: PgBoss): Promise<void> {
-  void boss;
+/** Running jobs' controllers: aborted on shutdown or expiry, which kills their ffmpeg. */
+export const running = new Set<AbortController>();
+
+export async function registerJobs(boss: PgBoss, concurrency: number): Promise<void> {
+  await boss.createQueue(CLIP_PROCESS_QUEUE, { name: CLIP_PROCESS_QUEUE, ...clipProcessPolicy });
+  const handler: PgBoss.WorkWithMetadataHandler<unknown> = async ([job]) => {
+    if (!job) return;
+    const { clipId } = clipProcessPayload.parse(job.data);
+    const controller = new AbortController();
+    // pg-boss gives the job to another worker after expiry; stop ours before that.
+    const expiry = setTimeout(() => controller.abort(), Math.max(5, job.expireInSeconds - 5) * 1000);
+    running.add(controller);
+    try {
+      const outcome = await runClipJob(clipId, controller.signal, job.retryCount >= job.retryLimit);
+      console.log(JSON.stringify({ event: "clip_job", clipId, outcome, try: job.retryCount + 1 }));
+    } finally {
+      clearTimeout(expiry);
+      running.delete(controller);
+    }
+  };
+  // Each work() call is one job at a time; concurrency = how many clips this process runs at once.
+  for (let i = 0; i < concurrency; i++) {
+    await boss.work(CLIP_PROCESS_QUEUE, { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: 0.5 }, handler);
+  }
 }

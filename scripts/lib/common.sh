@@ -89,6 +89,7 @@ spawn() {
   local name="$1"; shift
   "$@" >"$DATA_DIR/$name.log" 2>&1 &
   PIDS+=("$!")
+  echo "$!" >"$DATA_DIR/$name.pid"
 }
 
 wait_for_port() {

@@ -1,0 +1,19 @@
+import { z } from "zod";
+
+export const VIEWS = ["overhead", "face-on", "down-the-line"] as const;
+
+/** What the browser or the capture computer says about a file before sending it. */
+export const clipCreateSchema = z.object({
+  fittingId: z.string().uuid(),
+  buildId: z.string().uuid(),
+  view: z.enum(VIEWS),
+  fileName: z.string().trim().min(1).max(255),
+  contentType: z.string().trim().regex(/^[\w.+-]+\/[\w.+-]+$/, "must be a MIME type such as video/mp4").max(100),
+  sizeBytes: z.number().int().min(0),
+  captureFps: z.number().positive().max(10_000).optional(),
+  slowMotionFactor: z.number().min(1).max(64).optional(),
+  strokeId: z.string().uuid().optional(),
+  consentConfirmed: z.boolean().optional(),
+});
+
+export const clipListQuery = z.object({ fittingId: z.string().uuid() });

@@ -1,0 +1,88 @@
+import "server-only";
+import { and, asc, eq } from "drizzle-orm";
+import type { z } from "zod";
+import { db, schema } from "@/db";
+import { env } from "@/lib/config/env";
+import type { clipCreateSchema } from "@/lib/schemas/clip-upload";
+import type { SignedInActor } from "../access";
+import { ApiError } from "../http/errors";
+import { enqueueClipProcessing } from "../queue";
+import { clipKeys, deleteKeys, objectSize, presignUpload } from "../storage";
+import { loadClip } from "./clip-access";
+import { fittingForWrite, getFitting } from "./fittings";
+
+const { clips, builds, fittings } = schema;
+
+/** Creates the clip row (`awaiting_upload`) and a presigned PUT bound to a key the server made. */
+export async function createClipUpload(actor: SignedInActor, input: z.infer<typeof clipCreateSchema>) {
+  const fitting = await fittingForWrite(actor, input.fittingId);
+  const [build] = await db.select().from(builds).where(and(eq(builds.id, input.buildId), eq(builds.fittingId, fitting.id)));
+  if (!build) throw new ApiError("not_found", "No such build in this fitting");
+  const max = env().UPLOAD_MAX_BYTES;
+  if (input.sizeBytes > max) throw new ApiError("payload_too_large", `The file is ${mib(input.sizeBytes)}; the limit is ${mib(max)}`);
+  if (!fitting.consentConfirmedAt) {
+    if (!input.consentConfirmed) {
+      throw new ApiError("unprocessable", "Confirm the golfer's consent to video (a guardian's for a minor) before the first upload of this fitting");
+    }
+    await db.update(fittings).set({ consentConfirmedAt: new Date() }).where(eq(fittings.id, fitting.id));
+  }
+  const [studio] = await db.select({ settings: schema.studios.settings }).from(schema.studios).where(eq(schema.studios.id, fitting.studioId));
+  const captureFps = input.captureFps ?? studio!.settings.cameraFps[input.view];
+  const id = crypto.randomUUID();
+  const key = clipKeys(fitting.studioId, id).source;
+  const [clip] = await db
+    .insert(clips)
+    .values({
+      id, studioId: fitting.studioId, fittingId: fitting.id, buildId: build.id, strokeId: input.strokeId ?? null, view: input.view,
+      originalName: input.fileName, contentType: input.contentType, sizeBytes: input.sizeBytes, objectKey: key, captureFps,
+      slowMotionFactor: input.slowMotionFactor ?? Math.max(1, Math.round(captureFps / 30)), createdBy: actor.userId,
+    })
+    .returning();
+  const url = await presignUpload(key, input.contentType, input.sizeBytes);
+  return { clip: clip!, upload: { method: "PUT" as const, url, headers: { "content-type": input.contentType } } };
+}
+
+/**
+ * The browser says the upload is done: check the stored object (it must be there, with the
+ * declared size) and queue processing once. A second call finds the clip queued and queues nothing.
+ */
+export async function completeClipUpload(actor: SignedInActor, clipId: string) {
+  const { clip } = await loadClip(actor, clipId, "golfer.write");
+  if (clip.state !== "awaiting_upload") return { clip, queued: false };
+  const size = await objectSize(clip.objectKey);
+  if (size === null) throw new ApiError("conflict", "The upload has not arrived yet: send the file to the upload URL first");
+  if (size !== clip.sizeBytes || size > env().UPLOAD_MAX_BYTES) {
+    await deleteKeys([clip.objectKey]);
+    throw new ApiError("unprocessable", `The stored file is ${size} bytes but ${clip.sizeBytes} were declared; upload it again`);
+  }
+  const [queued] = await db
+    .update(clips)
+    .set({ state: "queued", progress: 0, updatedAt: new Date() })
+    .where(and(eq(clips.id, clip.id), eq(clips.state, "awaiting_upload")))
+    .returning();
+  if (!queued) return { clip: (await loadClip(actor, clipId)).clip, queued: false };
+  try {
+    await enqueueClipProcessing({ clipId: clip.id });
+  } catch (err) {
+    // Put the clip back so that the next completion call queues it again.
+    await db.update(clips).set({ state: "awaiting_upload" }).where(eq(clips.id, clip.id));
+    throw err;
+  }
+  return { clip: queued, queued: true };
+}
+
+/** The fitting's clips with their live state, for the upload panel. */
+export async function listClipsOfFitting(actor: SignedInActor, fittingId: string) {
+  await getFitting(actor, fittingId);
+  return db
+    .select({
+      id: clips.id, buildId: clips.buildId, view: clips.view, state: clips.state, progress: clips.progress,
+      failureReason: clips.failureReason, originalName: clips.originalName, frameCount: clips.frameCount,
+      captureFps: clips.captureFps, createdAt: clips.createdAt,
+    })
+    .from(clips)
+    .where(eq(clips.fittingId, fittingId))
+    .orderBy(asc(clips.createdAt));
+}
+
+const mib = (bytes: number) => `${(bytes / 1024 / 1024).toFixed(1)} MiB`;

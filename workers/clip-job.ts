@@ -1,0 +1,93 @@
+// Processes one uploaded clip: source from the store → frames, strip, poster, proxy and the
+// motion signal back to the store and the clip row. Safe to run twice: every output has a
+// fixed key and the row is overwritten, so a retry leaves exactly one set.
+import { createWriteStream } from "node:fs";
+import { mkdtemp, rm } from "node:fs/promises";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { Readable } from "node:stream";
+import { pipeline } from "node:stream/promises";
+import { eq } from "drizzle-orm";
+import { db, schema } from "@/db";
+import { clipKeys, clipPrefix, deleteKeys, getObjectStream, listKeys } from "@/lib/server/storage";
+import { uploadFiles, type FileUpload } from "./upload-files";
+import { ClipRefusedError, processClipFile } from "./video/pipeline";
+
+const { clips } = schema;
+const frameName = (n: number) => `${String(n).padStart(6, "0")}.jpg`;
+
+export type ClipJobOutcome = "ready" | "refused" | "skipped";
+
+export async function runClipJob(clipId: string, signal: AbortSignal, isLastTry: boolean): Promise<ClipJobOutcome> {
+  const [clip] = await db.select().from(clips).where(eq(clips.id, clipId));
+  if (!clip || clip.state === "ready" || clip.state === "awaiting_upload") return "skipped";
+  await setClip(clipId, { state: "processing", progress: 0, failureReason: null });
+  const work = await mkdtemp(path.join(tmpdir(), "fitframe-clip-"));
+  const keys = clipKeys(clip.studioId, clip.id);
+  try {
+    const input = path.join(work, "source");
+    const body = await getObjectStream(clip.objectKey);
+    if (!body) throw new Error("the uploaded file is missing from the store");
+    await pipeline(body as Readable, createWriteStream(input), { signal });
+
+    const outDir = path.join(work, "out");
+    const framesDir = path.join(outDir, "frames");
+    let windowUpload: Promise<void> = Promise.resolve();
+    let lastProgress = 0;
+    const result = await processClipFile(input, outDir, {
+      captureFps: clip.captureFps,
+      slowMotionFactor: clip.slowMotionFactor,
+      signal,
+      onProgress: (percent) => {
+        // A row update every 5 % is enough for the live list.
+        if (percent - lastProgress >= 5 && percent < 100) {
+          lastProgress = percent;
+          void setClip(clipId, { progress: Math.round(percent * 0.9) });
+        }
+      },
+      // The frames around impact go up first: the fitter reviews the putt just hit.
+      onWindowReady: (frames) => {
+        windowUpload = uploadFiles(frames.map((n) => ({ file: path.join(framesDir, frameName(n)), key: keys.frame(n), contentType: "image/jpeg" })));
+      },
+    });
+    await windowUpload;
+    const window = new Set(result.windowFrames);
+    const rest: FileUpload[] = [];
+    for (let n = 0; n < result.frameCount; n++) {
+      if (!window.has(n)) rest.push({ file: path.join(result.framesDir, frameName(n)), key: keys.frame(n), contentType: "image/jpeg" });
+    }
+    rest.push(
+      { file: result.posterFile, key: keys.poster, contentType: "image/jpeg" },
+      { file: result.stripFile, key: keys.strip, contentType: "image/jpeg" },
+      { file: result.proxy.file, key: keys.proxy, contentType: "video/mp4" },
+    );
+    await uploadFiles(rest);
+    await setClip(clipId, {
+      state: "ready", progress: 100, failureReason: null,
+      width: result.sourceWidth, height: result.sourceHeight, frameCount: result.frameCount,
+      containerFps: result.containerFps, durationS: result.frameCount / result.containerFps,
+      motionSignal: result.motionSignal, suggestedImpactFrame: result.suggestedImpact?.frame ?? null,
+    });
+    return "ready";
+  } catch (err) {
+    if (err instanceof ClipRefusedError) {
+      await fail(clip.studioId, clipId, err.reason);
+      return "refused";
+    }
+    if (isLastTry && !signal.aborted) await fail(clip.studioId, clipId, "Processing failed three times; try uploading the clip again.");
+    else await setClip(clipId, { state: "queued" });
+    throw err;
+  } finally {
+    await rm(work, { recursive: true, force: true });
+  }
+}
+
+/** A refused clip keeps its row (with the reason) but no objects: nothing stray in the store. */
+async function fail(studioId: string, clipId: string, reason: string) {
+  await deleteKeys(await listKeys(clipPrefix(studioId, clipId)));
+  await setClip(clipId, { state: "failed", failureReason: reason, progress: 0 });
+}
+
+function setClip(clipId: string, values: Partial<typeof clips.$inferInsert>) {
+  return db.update(clips).set({ ...values, updatedAt: new Date() }).where(eq(clips.id, clipId));
+}
