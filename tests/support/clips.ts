@@ -15,10 +15,8 @@ export async function uploadClip(auth: Auth, file: string, target: { fittingId: 
   });
   if (created.status !== 201) throw new Error(`create clip: ${created.status} ${JSON.stringify(created.body)}`);
   const { clip, upload } = created.body as { clip: { id: string }; upload: { url: string; headers: Record<string, string> } };
-  if (size > 0) {
-    const put = await fetch(upload.url, { method: "PUT", headers: upload.headers, body: await readFile(file) });
-    if (!put.ok) throw new Error(`upload: ${put.status}`);
-  }
+  const put = await fetch(upload.url, { method: "PUT", headers: upload.headers, body: await readFile(file) });
+  if (!put.ok) throw new Error(`upload: ${put.status}`);
   const done = await call(auth, "POST", `/api/clips/${clip.id}/complete`);
   return { clipId: clip.id, complete: done };
 }
