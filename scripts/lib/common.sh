@@ -124,6 +124,14 @@ start_mail_catcher() {
   log "mail catcher: SMTP 127.0.0.1:$SMTP_PORT, messages at http://127.0.0.1:$MAIL_HTTP_PORT/messages"
 }
 
+# The payment provider's local fake (scripts/payments-fake.ts); the app's Stripe SDK points here.
+start_payments_fake() {
+  export STRIPE_API_PORT="${STRIPE_API_PORT:-$PAYMENTS_PORT}"
+  spawn payments node --import tsx "$ROOT/scripts/payments-fake.ts"
+  wait_for_port "$PAYMENTS_PORT" payments
+  log "payments fake on 127.0.0.1:$PAYMENTS_PORT"
+}
+
 load_env() {
   local file="$1"
   set -a; # shellcheck disable=SC1090
