@@ -11,16 +11,20 @@ import { eq } from "drizzle-orm";
 import { db, schema } from "@/db";
 import { clipKeys, clipPrefix, deleteKeys, getObjectStream, listKeys } from "@/lib/server/storage";
 import { uploadFiles, type FileUpload } from "./upload-files";
-import { ClipRefusedError, processClipFile } from "./video/pipeline";
+import { ClipRefusedError, processClipFile } from "./video";
 
 const { clips } = schema;
 const frameName = (n: number) => `${String(n).padStart(6, "0")}.jpg`;
 
-export type ClipJobOutcome = "ready" | "refused" | "skipped";
+export type ClipJobOutcome = { outcome: "ready" | "refused" | "skipped"; seconds?: Record<string, number> };
 
 export async function runClipJob(clipId: string, signal: AbortSignal, isLastTry: boolean): Promise<ClipJobOutcome> {
   const [clip] = await db.select().from(clips).where(eq(clips.id, clipId));
-  if (!clip || clip.state === "ready" || clip.state === "awaiting_upload") return "skipped";
+  if (!clip || clip.state === "ready" || clip.state === "awaiting_upload") return { outcome: "skipped" };
+  // Phase times go to the log, so slow stores or slow decodes show up in production too.
+  const t0 = performance.now();
+  const seconds: Record<string, number> = {};
+  const mark = (phase: string) => (seconds[phase] = Math.round(performance.now() - t0) / 1000);
   await setClip(clipId, { state: "processing", progress: 0, failureReason: null });
   const work = await mkdtemp(path.join(tmpdir(), "fitframe-clip-"));
   const keys = clipKeys(clip.studioId, clip.id);
@@ -29,6 +33,7 @@ export async function runClipJob(clipId: string, signal: AbortSignal, isLastTry:
     const body = await getObjectStream(clip.objectKey);
     if (!body) throw new Error("the uploaded file is missing from the store");
     await pipeline(body as Readable, createWriteStream(input), { signal });
+    mark("downloaded");
 
     const outDir = path.join(work, "out");
     const framesDir = path.join(outDir, "frames");
@@ -47,9 +52,13 @@ export async function runClipJob(clipId: string, signal: AbortSignal, isLastTry:
       },
       // The frames around impact go up first: the fitter reviews the putt just hit.
       onWindowReady: (frames) => {
-        windowUpload = uploadFiles(frames.map((n) => ({ file: path.join(framesDir, frameName(n)), key: keys.frame(n), contentType: "image/jpeg" })));
+        mark("windowWritten");
+        windowUpload = uploadFiles(frames.map((n) => ({ file: path.join(framesDir, frameName(n)), key: keys.frame(n), contentType: "image/jpeg" }))).then(() => {
+          mark("windowStored");
+        });
       },
     });
+    mark("processed");
     await windowUpload;
     const window = new Set(result.windowFrames);
     const rest: FileUpload[] = [];
@@ -62,17 +71,18 @@ export async function runClipJob(clipId: string, signal: AbortSignal, isLastTry:
       { file: result.proxy.file, key: keys.proxy, contentType: "video/mp4" },
     );
     await uploadFiles(rest);
+    mark("stored");
     await setClip(clipId, {
       state: "ready", progress: 100, failureReason: null,
       width: result.sourceWidth, height: result.sourceHeight, frameCount: result.frameCount,
       containerFps: result.containerFps, durationS: result.frameCount / result.containerFps,
       motionSignal: result.motionSignal, suggestedImpactFrame: result.suggestedImpact?.frame ?? null,
     });
-    return "ready";
+    return { outcome: "ready", seconds };
   } catch (err) {
     if (err instanceof ClipRefusedError) {
       await fail(clip.studioId, clipId, err.reason);
-      return "refused";
+      return { outcome: "refused" };
     }
     if (isLastTry && !signal.aborted) await fail(clip.studioId, clipId, "Processing failed three times; try uploading the clip again.");
     else await setClip(clipId, { state: "queued" });

@@ -3,6 +3,7 @@
 import type PgBoss from "pg-boss";
 import { CLIP_PROCESS_QUEUE, clipProcessPayload, clipProcessPolicy } from "@/lib/jobs/clip-process";
 import { runClipJob } from "./clip-job";
+import { startCommentMail } from "./comment-mail";
 
 /** Running jobs' controllers: aborted on shutdown or expiry, which kills their ffmpeg. */
 export const running = new Set<AbortController>();
@@ -17,8 +18,8 @@ export async function registerJobs(boss: PgBoss, concurrency: number): Promise<v
     const expiry = setTimeout(() => controller.abort(), Math.max(5, job.expireInSeconds - 5) * 1000);
     running.add(controller);
     try {
-      const outcome = await runClipJob(clipId, controller.signal, job.retryCount >= job.retryLimit);
-      console.log(JSON.stringify({ event: "clip_job", clipId, outcome, try: job.retryCount + 1 }));
+      const result = await runClipJob(clipId, controller.signal, job.retryCount >= job.retryLimit);
+      console.log(JSON.stringify({ event: "clip_job", clipId, ...result, try: job.retryCount + 1 }));
     } finally {
       clearTimeout(expiry);
       running.delete(controller);
@@ -28,4 +29,6 @@ export async function registerJobs(boss: PgBoss, concurrency: number): Promise<v
   for (let i = 0; i < concurrency; i++) {
     await boss.work(CLIP_PROCESS_QUEUE, { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: 0.5 }, handler);
   }
+  // Batched comment e-mails: a polling loop over the outbox table (no queue needed).
+  startCommentMail();
 }

@@ -23,10 +23,15 @@ ensure_debian_packages() {
   PGBIN="$(ls -d /usr/lib/postgresql/*/bin | sort -V | tail -1)"
 }
 
+# Installs when package-lock.json changed since the last install (by content, not by date:
+# a fresh checkout has new dates and an identical lock).
 ensure_node_modules() {
-  if [ ! -d "$ROOT/node_modules" ] || [ "$ROOT/package-lock.json" -nt "$ROOT/node_modules/.package-lock.json" ]; then
+  local stamp="$ROOT/node_modules/.fitframe-lock.sha256" want
+  want="$(sha256sum "$ROOT/package-lock.json" | cut -d' ' -f1)"
+  if [ ! -d "$ROOT/node_modules" ] || [ "$(cat "$stamp" 2>/dev/null)" != "$want" ]; then
     log "npm ci"
     (cd "$ROOT" && npm ci --no-audit --no-fund --loglevel=error)
+    echo "$want" >"$stamp"
   fi
 }
 

@@ -26,11 +26,15 @@ async function actorFromBearer(authorization: string): Promise<SignedInActor | n
   const value = authorization.slice("bearer ".length).trim();
   if (!value) return null;
   const [token] = await db
-    .update(schema.apiTokens)
-    .set({ lastUsedAt: new Date() })
-    .where(and(eq(schema.apiTokens.tokenHash, hashToken(value)), isNull(schema.apiTokens.revokedAt)))
-    .returning({ userId: schema.apiTokens.userId });
-  return token ? loadActor(token.userId, "token") : null;
+    .select({ id: schema.apiTokens.id, userId: schema.apiTokens.userId, lastUsedAt: schema.apiTokens.lastUsedAt })
+    .from(schema.apiTokens)
+    .where(and(eq(schema.apiTokens.tokenHash, hashToken(value)), isNull(schema.apiTokens.revokedAt)));
+  if (!token) return null;
+  // "Last used" to the minute is enough; writing it on every request would serialise a busy script on one row.
+  if (!token.lastUsedAt || Date.now() - token.lastUsedAt.getTime() > 60_000) {
+    db.update(schema.apiTokens).set({ lastUsedAt: new Date() }).where(eq(schema.apiTokens.id, token.id)).catch((err) => console.error("token last-used update failed", err));
+  }
+  return loadActor(token.userId, "token");
 }
 
 /** The signed-in person for this request (Bearer token or browser session), checked against the database. */
