@@ -10,8 +10,9 @@ export type Actor = {
 };
 
 /** Studio-level permissions need no subject; golfer-level ones act on one golfer's data. */
-export type StudioPermission = "golfers.list" | "golfers.create" | "users.manage" | "studio.settings" | "tokens.manage";
-export type GolferPermission = "golfer.read" | "golfer.write" | "golfer.comment";
+export type StudioPermission = "golfers.list" | "golfers.create" | "users.manage" | "studio.settings" | "tokens.manage"
+  | "bookings.manage" | "invitations.send";
+export type GolferPermission = "golfer.read" | "golfer.write" | "golfer.comment" | "golfer.export" | "golfer.erase" | "golfer.mark";
 export type Permission = StudioPermission | GolferPermission;
 
 /** The data a golfer-level check is about: its studio, its golfer, whether a coach was given it. */
@@ -26,6 +27,10 @@ const studioRules: Record<StudioPermission, readonly Role[]> = {
   "users.manage": ["admin"],
   "studio.settings": ["admin"],
   "tokens.manage": ["admin", "fitter"],
+  // The studio's diary: confirm, decline, cancel or move any booking; see the week calendar.
+  "bookings.manage": ["admin", "fitter"],
+  // Invite a golfer or a coach by e-mail (single-use link).
+  "invitations.send": ["admin", "fitter"],
 };
 
 export function decideStudio(actor: Actor, permission: StudioPermission): Decision {
@@ -48,6 +53,24 @@ export function decideGolfer(actor: Actor, permission: GolferPermission, subject
   if (!canSee(actor, subject)) return "not_found";
   if (permission === "golfer.read") return "allow";
   if (permission === "golfer.comment") return "allow";
+  // The golfer's own data: the golfer itself, and the studio's staff for export; deleting it is
+  // left to the golfer and the studio's admin (a coach never exports or deletes).
+  if (permission === "golfer.export") return actor.role === "coach" ? "forbidden" : "allow";
+  if (permission === "golfer.erase") return actor.role === "admin" || actor.role === "golfer" ? "allow" : "forbidden";
+  // golfer.mark: drawing marks on clips; a shared coach may draw its own, a golfer only reads.
+  if (permission === "golfer.mark") return actor.role === "golfer" ? "forbidden" : "allow";
   // golfer.write: the studio's staff who run fittings.
   return actor.role === "admin" || actor.role === "fitter" ? "allow" : "forbidden";
+}
+
+/** Changing or removing an existing mark: studio staff any mark, a coach only the marks it drew. */
+export function mayChangeMark(actor: Actor, authorUserId: string | null): boolean {
+  if (actor.role === "admin" || actor.role === "fitter") return true;
+  return actor.role === "coach" && authorUserId === actor.userId;
+}
+
+/** Resolving (or reopening) a comment thread: studio staff any thread, others only their own comment. */
+export function mayResolveComment(actor: Actor, authorUserId: string | null): boolean {
+  if (actor.role === "admin" || actor.role === "fitter") return true;
+  return authorUserId !== null && authorUserId === actor.userId;
 }
