@@ -5,8 +5,8 @@
  * Method. Until impact the picture changes only where the head moves; a pendulum head
  * speeds up and slows down smoothly, so its share of the signal changes little from one
  * frame to the next. From the first frame after impact the ball moves too, and keeps
- * moving, faster than the head (a putt leaves at roughly 1.3–1.7 × head speed, common
- * practice). So the signal takes a sudden step up that lasts, between frame k and k + 1.
+ * moving, faster than the head (a putt leaves at roughly 1.3–1.7 × head speed, from
+ * memory). So the signal takes a sudden step up that lasts, between frame k and k + 1.
  * For each frame c we measure a persistent rise:
  *   rise(c) = min(s[c+1], s[c+2]) − max(s[c], s[c−1])
  * Taking the minimum after and the maximum before means a one-frame spike (a flicker, a
@@ -14,6 +14,8 @@
  * impact frame is the c with the largest rise. Its strength is that rise divided by the
  * typical frame-to-frame change of the signal (median absolute first difference); a
  * suggestion weaker than MIN_STRENGTH is withheld, and the fitter marks impact by hand.
+ * Limits: anything else that starts moving for good in one frame (a person stepping into
+ * view, a light switched on) can win; the fitter confirms every suggestion.
  */
 
 export interface ImpactSuggestion {

@@ -1,7 +1,8 @@
 /**
  * Motion signal: one number per frame, the mean absolute difference between a frame and
- * the one before it, on small greyscale frames (about 128 px wide: big enough to keep a
- * ball several pixels across, small enough to cost nothing next to decoding).
+ * the one before it, on small greyscale frames (the worker uses 128 px on the long side:
+ * big enough to keep a ball several pixels across, small enough to cost nothing next to
+ * decoding).
  * signal[0] = 0 because the first frame has no predecessor.
  */
 

@@ -7,6 +7,8 @@
  * Step 4 starts with step 2 at a lower CPU priority, so it soaks up idle cores without
  * delaying the window. Frames reach frames/ only by rename, so a reader never sees a
  * half-written JPEG (window frames are later replaced by identical full-pass files).
+ * On any failure every ffmpeg has exited before the promise rejects; outDir may then
+ * hold partial output, which the caller removes.
  */
 import { mkdir, readdir, rename, rm } from "node:fs/promises";
 import path from "node:path";
@@ -22,30 +24,17 @@ import {
   UnreadableVideoError,
   type VideoHeader,
 } from "./ffmpeg";
+import { proxyTiming, stripLayout } from "./layout";
+import { ClipRefusedError, CLIP_LIMITS, refuseUnusable, tooManyFrames, truncated } from "./refusals";
 
-export const CLIP_LIMITS = { maxDurationS: 60, maxFrames: 20_000, maxLongSidePx: 4096 } as const;
 export const FRAME_MAX_LONG_SIDE = 1920;
 export const PROXY_MAX_LONG_SIDE = 720;
-export const PROXY_MAX_FPS = 60;
 export const WINDOW_HALF_WIDTH = 20;
-const MOTION_WIDTH = 128;
+const MOTION_LONG_SIDE = 128;
 const JPEG_QUALITY = 3;
-const STRIP_TILES = 24;
 const STRIP_THUMB_LONG_SIDE = 160;
 const POSTER_LONG_SIDE = 720;
 const FULL_PASS_NICENESS = 10;
-
-export type RefusalCode =
-  | "empty-file" | "not-a-video" | "no-video-stream" | "still-image" | "truncated"
-  | "too-long" | "too-many-frames" | "too-large";
-
-/** The clip cannot be used; `reason` is shown to the fitter as the clip's failure. */
-export class ClipRefusedError extends Error {
-  constructor(readonly code: RefusalCode, readonly reason: string) {
-    super(reason);
-    this.name = "ClipRefusedError";
-  }
-}
 
 export interface ClipProcessingOptions {
   captureFps: number;
@@ -71,33 +60,6 @@ export interface ProcessedClip {
   framesDir: string;
   posterFile: string;
   stripFile: string;
-}
-
-/** Proxy timing: playback at captureFps ÷ slowMotionFactor, thinned to ≤ 60 fps by an integer step. */
-export function proxyTiming(captureFps: number, slowMotionFactor: number): { playbackFps: number; keepEvery: number; fps: number } {
-  if (!(captureFps > 0) || !(slowMotionFactor > 0)) throw new Error("captureFps and slowMotionFactor must be positive");
-  const playbackFps = captureFps / slowMotionFactor;
-  const keepEvery = playbackFps <= PROXY_MAX_FPS ? 1 : Math.ceil(playbackFps / PROXY_MAX_FPS);
-  return { playbackFps, keepEvery, fps: playbackFps / keepEvery };
-}
-
-export function refuseUnusable(header: VideoHeader): void {
-  if (!header.hasVideo) {
-    throw new ClipRefusedError("no-video-stream", header.hasAudio ? "The file has sound but no picture." : "The file has no video picture in it.");
-  }
-  if (header.isStillImage) throw new ClipRefusedError("still-image", "This is a still picture, not a video.");
-  const longSide = Math.max(header.width, header.height);
-  if (longSide > CLIP_LIMITS.maxLongSidePx) {
-    throw new ClipRefusedError("too-large", `The video is ${header.width} × ${header.height} pixels; the limit is ${CLIP_LIMITS.maxLongSidePx} pixels on the long side. Record at 4K or less.`);
-  }
-  if (header.durationS > CLIP_LIMITS.maxDurationS) {
-    throw new ClipRefusedError("too-long", `The clip lasts ${Math.round(header.durationS)} seconds; the limit is ${CLIP_LIMITS.maxDurationS}. Trim it to the stroke.`);
-  }
-  if ((header.headerFrameCount ?? 0) > CLIP_LIMITS.maxFrames) throw tooManyFrames(header.headerFrameCount ?? 0);
-}
-
-function tooManyFrames(count: number): ClipRefusedError {
-  return new ClipRefusedError("too-many-frames", `The clip has ${count.toLocaleString("en")} frames; the limit is ${CLIP_LIMITS.maxFrames.toLocaleString("en")}. Trim it to the stroke.`);
 }
 
 async function moveFrames(fromDir: string, toDir: string): Promise<void> {
@@ -152,12 +114,7 @@ export async function processClipFile(input: string, outDir: string, options: Cl
       frameSize: scaled ? frameSize : null,
       jpegQuality: JPEG_QUALITY,
       proxy: { file: files.proxy, size: proxySize, playbackFps: timing.playbackFps, keepEvery: timing.keepEvery },
-      strip: {
-        file: files.strip,
-        every: Math.max(1, Math.ceil(expectedFrames / STRIP_TILES)),
-        tiles: Math.min(STRIP_TILES, expectedFrames),
-        thumbSize: capLongSide(source.width, source.height, STRIP_THUMB_LONG_SIDE, true),
-      },
+      strip: { file: files.strip, ...stripLayout(expectedFrames), thumbSize: capLongSide(source.width, source.height, STRIP_THUMB_LONG_SIDE, true) },
     },
     {
       signal,
@@ -174,7 +131,7 @@ export async function processClipFile(input: string, outDir: string, options: Cl
 
   try {
     const motion = new MotionSignalBuilder();
-    const motionSize = capLongSide(source.width, source.height, MOTION_WIDTH, true);
+    const motionSize = capLongSide(source.width, source.height, MOTION_LONG_SIDE, true);
     const grey = await readGreyFrames(input, {
       width: motionSize.width,
       height: motionSize.height,
@@ -188,7 +145,7 @@ export async function processClipFile(input: string, outDir: string, options: Cl
       },
     });
     if (header.headerFrameCount && grey.frameCount < header.headerFrameCount && grey.damaged) {
-      throw new ClipRefusedError("truncated", `The video file is incomplete: only ${grey.frameCount} of its ${header.headerFrameCount} frames could be read. It was probably cut short during upload.`);
+      throw truncated(grey.frameCount, header.headerFrameCount);
     }
     if (grey.frameCount === 0) throw new ClipRefusedError("not-a-video", "No picture could be read from this file.");
     if (grey.frameCount > CLIP_LIMITS.maxFrames) throw tooManyFrames(grey.frameCount);

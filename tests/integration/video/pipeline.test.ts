@@ -11,7 +11,9 @@ import { promisify } from "node:util";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { generateBadFile, generateClip, type BadFileKind, type ClipOptions } from "@/tests/fixtures/generate-clips";
 import { probe, VideoJobAbortedError } from "@/workers/video/ffmpeg";
-import { ClipRefusedError, processClipFile, proxyTiming, type ProcessedClip, type RefusalCode } from "@/workers/video/pipeline";
+import { proxyTiming, stripLayout } from "@/workers/video/layout";
+import { processClipFile, type ProcessedClip } from "@/workers/video/pipeline";
+import { ClipRefusedError, type RefusalCode } from "@/workers/video/refusals";
 
 const run = promisify(execFile);
 
@@ -118,7 +120,8 @@ describe.each(clips)("clip $name", ({ name, slowMotionFactor, options }) => {
   it("writes the contact strip and the poster as single images", async () => {
     const strip = await ffprobeStream(result.stripFile);
     const poster = await ffprobeStream(result.posterFile);
-    expect(strip.width).toBeGreaterThan(strip.height * 10);
+    const { tiles } = stripLayout(result.frameCount);
+    expect([strip.width, strip.height]).toEqual([tiles * 160, 90]);
     expect(Math.max(poster.width, poster.height)).toBeLessThanOrEqual(720);
   });
 });
@@ -166,6 +169,15 @@ describe("proxy timing", () => {
     expect(proxyTiming(240, 4)).toEqual({ playbackFps: 60, keepEvery: 1, fps: 60 });
     expect(proxyTiming(480, 2)).toEqual({ playbackFps: 240, keepEvery: 4, fps: 60 });
     expect(proxyTiming(1000, 4)).toEqual({ playbackFps: 250, keepEvery: 5, fps: 50 });
+  });
+});
+
+describe("contact strip layout", () => {
+  it("spreads at most 24 thumbnails evenly and leaves no empty tile", () => {
+    expect(stripLayout(480)).toEqual({ every: 20, tiles: 24 });
+    expect(stripLayout(300)).toEqual({ every: 13, tiles: 24 });
+    expect(stripLayout(40)).toEqual({ every: 2, tiles: 20 });
+    expect(stripLayout(5)).toEqual({ every: 1, tiles: 5 });
   });
 });
 
