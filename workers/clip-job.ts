@@ -37,7 +37,18 @@ export async function runClipJob(clipId: string, signal: AbortSignal, isLastTry:
 
     const outDir = path.join(work, "out");
     const framesDir = path.join(outDir, "frames");
+    const frameUpload = (n: number, dir = framesDir): FileUpload => ({
+      file: path.join(dir, frameName(n)), movedTo: path.join(framesDir, frameName(n)), key: keys.frame(n), contentType: "image/jpeg",
+    });
+    // Uploads run beside ffmpeg; their first failure is kept and thrown once processing ends
+    // (a rejected promise nobody awaits yet would bring the process down).
+    let uploadError: unknown = null;
+    const noteFailure = (err: unknown) => void (uploadError ??= err);
     let windowUpload: Promise<void> = Promise.resolve();
+    // Frames go up while ffmpeg is still writing later ones; one chain keeps them in order.
+    let streamed = -1;
+    let streaming: Promise<void> = Promise.resolve();
+    const stored = new Set<number>();
     let lastProgress = 0;
     const result = await processClipFile(input, outDir, {
       captureFps: clip.captureFps,
@@ -53,18 +64,25 @@ export async function runClipJob(clipId: string, signal: AbortSignal, isLastTry:
       // The frames around impact go up first: the fitter reviews the putt just hit.
       onWindowReady: (frames) => {
         mark("windowWritten");
-        windowUpload = uploadFiles(frames.map((n) => ({ file: path.join(framesDir, frameName(n)), key: keys.frame(n), contentType: "image/jpeg" }))).then(() => {
-          mark("windowStored");
-        });
+        frames.forEach((n) => stored.add(n));
+        windowUpload = uploadFiles(frames.map((n) => frameUpload(n))).then(() => void mark("windowStored"), noteFailure);
+      },
+      onFramesWritten: (upTo, dir) => {
+        const batch: FileUpload[] = [];
+        for (let n = streamed + 1; n <= upTo; n++) {
+          if (stored.has(n)) continue;
+          stored.add(n);
+          batch.push(frameUpload(n, dir));
+        }
+        streamed = Math.max(streamed, upTo);
+        if (batch.length > 0) streaming = streaming.then(() => uploadFiles(batch)).catch(noteFailure);
       },
     });
     mark("processed");
-    await windowUpload;
-    const window = new Set(result.windowFrames);
+    await Promise.all([windowUpload, streaming]);
+    if (uploadError) throw uploadError;
     const rest: FileUpload[] = [];
-    for (let n = 0; n < result.frameCount; n++) {
-      if (!window.has(n)) rest.push({ file: path.join(result.framesDir, frameName(n)), key: keys.frame(n), contentType: "image/jpeg" });
-    }
+    for (let n = 0; n < result.frameCount; n++) if (!stored.has(n)) rest.push(frameUpload(n));
     rest.push(
       { file: result.posterFile, key: keys.poster, contentType: "image/jpeg" },
       { file: result.stripFile, key: keys.strip, contentType: "image/jpeg" },

@@ -3,6 +3,7 @@
 import PgBoss from "pg-boss";
 import { env } from "@/lib/config/env";
 import { registerJobs, running } from "./jobs";
+import { warmUp } from "./video";
 
 const boss = new PgBoss({
   connectionString: env().DATABASE_URL,
@@ -12,6 +13,8 @@ const boss = new PgBoss({
 });
 boss.on("error", (err) => console.error("pg-boss error:", err.message));
 
+// fluent-ffmpeg asks ffmpeg for its formats once per process; do it before the first clip.
+await warmUp();
 await boss.start();
 await registerJobs(boss, env().WORKER_CONCURRENCY);
 console.log(`worker ready (pid ${process.pid})`);

@@ -43,6 +43,11 @@ export interface ClipProcessingOptions {
   signal: AbortSignal;
   onProgress?: (percent: number) => void;
   onWindowReady?: (frames: number[]) => void;
+  /**
+   * While the full pass runs: frames 0..completeUpTo are finished files named %06d.jpg in
+   * `dir`, so a caller may start storing them. They move to `framesDir` when the pass ends.
+   */
+  onFramesWritten?: (completeUpTo: number, dir: string) => void;
 }
 
 export interface ProcessedClip {
@@ -123,6 +128,8 @@ export async function processClipFile(input: string, outDir: string, options: Cl
       onFrameDone: (n) => {
         fullShare = n / expectedFrames;
         update();
+        // ffmpeg counts frames handed to the muxer; the last one may still be being written.
+        if (n >= 2) options.onFramesWritten?.(n - 2, fullStaging);
       },
     },
   );
