@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { db, schema } from "@/db";
 import { all, readGolfer, runMatrix, writeGolfer, type MatrixCase, type Target } from "../../support/matrix";
 import type { World } from "../../support/world";
-import { insertClip, insertMark } from "../marks/clip-rows";
+import { insertClip, insertMark } from "../../support/clip-rows";
 
 type Clip = Awaited<ReturnType<typeof insertClip>>;
 type W = World & { clips: Record<Target, Clip>; coachMarkId: string };

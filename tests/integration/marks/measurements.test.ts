@@ -11,7 +11,7 @@ import { db, schema } from "@/db";
 import { clipTruth, STANDARD_CLIPS, type ClipOptions, type Point } from "@/tests/fixtures/generate-clips";
 import { call, type Auth } from "../../support/http";
 import { makeWorld, tokenFor, type World } from "../../support/world";
-import { insertClip } from "./clip-rows";
+import { insertClip } from "../../support/clip-rows";
 
 const PATH_DEG = 2;
 const options: ClipOptions = { ...STANDARD_CLIPS["overhead-240-720p.mp4"]!, pathDeg: PATH_DEG };

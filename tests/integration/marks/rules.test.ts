@@ -4,7 +4,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { db, schema } from "@/db";
 import { call, signIn, type Auth } from "../../support/http";
 import { makeWorld, PASSWORD, tokenFor, type World } from "../../support/world";
-import { insertClip } from "./clip-rows";
+import { insertClip } from "../../support/clip-rows";
 
 let w: World;
 let fitter: Auth, coach: Auth, golfer: Auth, otherAdmin: Auth;

@@ -1,0 +1,38 @@
+// Access matrix for the clip pipeline's routes: registering uploads, completing them, the
+// live list, and the frame and media links.
+import { all, golferOf, readGolfer, runMatrix, writeGolfer, type MatrixCase, type Target } from "../../support/matrix";
+import type { World } from "../../support/world";
+import { insertClip } from "../../support/clip-rows";
+
+type Clip = Awaited<ReturnType<typeof insertClip>>;
+type W = World & { clips: Record<Target, Clip> };
+
+const clipPath = (w: W, t: Target) => `/api/clips/${w.clips[t].id}`;
+const redirectTo = (okStatus: number) => ({
+  own: { admin: okStatus, fitter: okStatus, coach: okStatus, golfer: okStatus, anon: 401 },
+  sibling: { admin: okStatus, fitter: okStatus, coach: 404, golfer: 404, anon: 401 },
+  other: all(404),
+});
+
+const cases: MatrixCase<W>[] = [
+  {
+    route: "POST /api/clips",
+    request: (w, t) => ({
+      method: "POST", path: "/api/clips",
+      body: { fittingId: golferOf(w, t).fitting.id, buildId: golferOf(w, t).build.id, view: "overhead", fileName: "p.mp4", contentType: "video/mp4", sizeBytes: 100, consentConfirmed: true },
+    }),
+    expect: writeGolfer(201),
+  },
+  { route: "GET /api/clips?fittingId=", request: (w, t) => ({ method: "GET", path: `/api/clips?fittingId=${golferOf(w, t).fitting.id}` }), expect: readGolfer },
+  // The clip is already processed, so an allowed completion queues nothing and answers 200.
+  { route: "POST /api/clips/{id}/complete", request: (w, t) => ({ method: "POST", path: `${clipPath(w, t)}/complete` }), expect: writeGolfer(200) },
+  { route: "GET /api/clips/{id}/frames/{n}", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/frames/3` }), expect: redirectTo(302) },
+  { route: "GET /api/clips/{id}/media/poster", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/media/poster` }), expect: redirectTo(302) },
+  { route: "GET /api/clips/{id}/media/proxy", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/media/proxy` }), expect: redirectTo(302) },
+];
+
+runMatrix("clip pipeline", cases, async (w) => {
+  const clips = {} as Record<Target, Clip>;
+  for (const t of ["own", "sibling", "other"] as Target[]) clips[t] = await insertClip(golferOf(w, t));
+  return { ...w, clips };
+});
