@@ -1,0 +1,43 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { ReviewLoader } from "@/components/review/review-loader";
+import type { ReviewClip } from "@/components/review/types";
+import { requirePageActor } from "@/lib/server/access";
+import { loadClip } from "@/lib/server/dal/clip-access";
+import { ApiError } from "@/lib/server/http/errors";
+
+export const metadata: Metadata = { title: "Clip review" };
+
+async function loadOrNotFound(id: string) {
+  const actor = await requirePageActor();
+  try {
+    return await loadClip(actor, id);
+  } catch (err) {
+    // A clip the actor may not see looks the same as one that does not exist.
+    if (err instanceof ApiError && (err.code === "not_found" || err.code === "forbidden")) notFound();
+    throw err;
+  }
+}
+
+export default async function ClipReviewPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  if (!/^[0-9a-f-]{36}$/i.test(id)) notFound();
+  const { clip, handedness, settings } = await loadOrNotFound(id);
+  const data: ReviewClip = {
+    id: clip.id,
+    view: clip.view,
+    state: clip.state,
+    failureReason: clip.failureReason,
+    width: clip.width ?? 0,
+    height: clip.height ?? 0,
+    frameCount: clip.frameCount ?? 0,
+    captureFps: clip.captureFps,
+    mirrored: clip.mirrored,
+    handedness,
+    motionSignal: clip.motionSignal ?? null,
+    suggestedImpactFrame: clip.suggestedImpactFrame,
+    moments: { address: clip.addressFrame, takeaway: clip.takeawayFrame, top: clip.topFrame, impact: clip.impactFrame, finish: clip.finishFrame },
+    windows: settings.windows ?? {},
+  };
+  return <ReviewLoader clip={data} />;
+}

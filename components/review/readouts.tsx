@@ -1,0 +1,46 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import { apiFetch } from "@/lib/client/api";
+import { METRICS_BY_VIEW, signWordsFor } from "@/lib/metrics/keys";
+import { sideWords, valueText, type Window } from "@/lib/review/readout";
+import { Gauge } from "./gauge";
+import type { MeasurementsReply, ReviewClip } from "./types";
+
+const VIEW_TITLE: Record<ReviewClip["view"], string> = { overhead: "Overhead", "face-on": "Face-on", "down-the-line": "Down-the-line" };
+
+/** The view's measurements beside the frame: value with sign and side, or what it still needs. */
+export function Readouts({ clip }: { clip: ReviewClip }) {
+  const { data, error } = useQuery({
+    queryKey: ["measurements", clip.id],
+    queryFn: () => apiFetch<MeasurementsReply>(`/api/clips/${clip.id}/measurements`),
+  });
+  const byKey = new Map((data?.measurements ?? []).map((m) => [m.key, m]));
+  return (
+    <section aria-labelledby="readouts-heading" className="flex min-h-0 flex-1 flex-col gap-3 overflow-y-auto p-4">
+      <h2 id="readouts-heading" className="text-label font-medium uppercase text-slate-300">{VIEW_TITLE[clip.view]} measurements</h2>
+      {error && <p className="text-label text-signal-light">Could not load the measurements: {error.message}</p>}
+      <dl className="flex flex-col gap-3">
+        {METRICS_BY_VIEW[clip.view].map((def) => {
+          const m = byKey.get(def.key);
+          const words = signWordsFor(clip.view, def.key, clip.handedness);
+          const window: Window | undefined = m?.window ?? data?.windows?.[def.key] ?? clip.windows[def.key];
+          return (
+            <div key={def.key} data-testid={`readout-${def.key}`} className="border-b border-ink-700 pb-2">
+              <dt className="text-label text-slate-300">{def.label}</dt>
+              {m && m.value !== null ? (
+                <dd>
+                  <span className="num text-readout text-chalk" data-testid="value">{valueText(m.value, m.unit, words !== null)}</span>
+                  <span className="ml-2 text-body text-slate-200">{sideWords(m.value, m.unit, words)}</span>
+                  {window && <Gauge value={m.value} window={window} label={def.label} />}
+                </dd>
+              ) : (
+                <dd className="text-label text-slate-400">{m?.needs?.length ? `Needs ${m.needs.join("; ")}` : "Not measured yet"}</dd>
+              )}
+            </div>
+          );
+        })}
+      </dl>
+    </section>
+  );
+}

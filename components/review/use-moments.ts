@@ -1,0 +1,24 @@
+"use client";
+
+import { useQueryClient } from "@tanstack/react-query";
+import { useState } from "react";
+import { apiFetch } from "@/lib/client/api";
+import type { MomentName, ReviewMoments } from "./types";
+
+/** The clip's frame moments; setting one saves it and refreshes the measurements that use it. */
+export function useMoments(clipId: string, initial: ReviewMoments, onError: (text: string) => void) {
+  const queryClient = useQueryClient();
+  const [moments, setMoments] = useState(initial);
+  const setMoment = async (name: MomentName, frame: number) => {
+    const before = moments;
+    setMoments({ ...moments, [name]: frame });
+    try {
+      await apiFetch(`/api/clips/${clipId}/moments`, { method: "PUT", body: { [name]: frame } });
+      await queryClient.invalidateQueries({ queryKey: ["measurements", clipId] });
+    } catch (err) {
+      setMoments(before);
+      onError(`Could not set ${name}: ${err instanceof Error ? err.message : String(err)}`);
+    }
+  };
+  return { moments, setMoment };
+}
