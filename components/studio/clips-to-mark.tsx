@@ -1,3 +1,5 @@
+import Link from "next/link";
+
 type Item = { id: string; view: string; golferName: string; updatedAt: Date };
 
 export function ClipsToMark({ items }: { items: Item[] }) {
@@ -9,9 +11,11 @@ export function ClipsToMark({ items }: { items: Item[] }) {
       ) : (
         <ul className="divide-y divide-chalk-200">
           {items.map((clip) => (
-            <li key={clip.id} className="flex items-baseline justify-between py-2">
-              <span>{clip.golferName}</span>
-              <span className="text-label text-slate-600">{clip.view}</span>
+            <li key={clip.id}>
+              <Link href={`/studio/clips/${clip.id}`} className="flex min-h-touch items-center justify-between hover:text-signal-dark">
+                <span>{clip.golferName}</span>
+                <span className="text-label text-slate-600">{clip.view}</span>
+              </Link>
             </li>
           ))}
         </ul>
