@@ -31,6 +31,7 @@ npx tsx scripts/migrate.ts
 node --conditions=react-server --import tsx scripts/seed.ts
 start_object_store "$(node -e 'console.log(new URL(process.argv[1]).port)' "$S3_ENDPOINT")" "$S3_BUCKET" "$NEXTAUTH_URL"
 start_mail_catcher
+start_payments_fake
 spawn worker node --conditions=react-server --import tsx workers/index.ts
 if [ $DEV = 1 ]; then
   spawn web node node_modules/next/dist/bin/next dev -p "$WEB_PORT" -H 127.0.0.1

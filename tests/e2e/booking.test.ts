@@ -1,0 +1,71 @@
+// In Chromium: a visitor books a fitting on the public page, creates its golfer account,
+// pays on the payments fake's page, the fitter confirms in the studio calendar, and the
+// golfer then sees the confirmed, paid visit (on /book/{slug}/bookings, which shows the
+// GolferBookings component, and as a booked fitting on its home /me).
+import type { Browser, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { freeSlots, PAYMENTS_URL, withBooking, type BookingWorld } from "../integration/booking/booking-world";
+import { launchBrowser } from "../support/browser";
+import { BASE } from "../support/http";
+import { makeWorld, PASSWORD } from "../support/world";
+
+let browser: Browser;
+let w: BookingWorld;
+
+beforeAll(async () => {
+  [browser, w] = await Promise.all([launchBrowser(), makeWorld().then(withBooking)]);
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function signInThroughForm(page: Page, email: string) {
+  await page.goto(`${BASE}/sign-in`);
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(PASSWORD);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL(/\/(studio|me)$/);
+}
+
+describe("booking and paying a fitting", () => {
+  it("a golfer books and pays, the fitter confirms, the golfer sees the visit", async () => {
+    const slot = (await freeSlots(w.studioA.slug, w.types.A.id))[0]!;
+    const email = `booker.${w.tag}@test.fitframe`;
+    const golfer = await (await browser.newContext()).newPage();
+    await golfer.goto(`${BASE}/book/${w.studioA.slug}`);
+    await golfer.getByRole("heading", { name: `Book a putter fitting at ${w.studioA.name}` }).waitFor();
+    await golfer.locator(`[data-slot="${slot.start}"]`).first().click();
+    await golfer.getByLabel("Name").fill("Booker Test");
+    await golfer.getByLabel("E-mail").fill(email);
+    await golfer.getByLabel(/^Password/).fill(PASSWORD);
+    await golfer.getByRole("button", { name: "Create account and continue" }).click();
+    await golfer.getByLabel("Usual miss").fill("leaves it short");
+    await golfer.getByRole("button", { name: /^Request / }).click();
+    await golfer.getByRole("heading", { name: "Request sent" }).waitFor();
+
+    await golfer.getByRole("button", { name: /^Pay .* now$/ }).click();
+    await golfer.waitForURL(`${PAYMENTS_URL}/pay/**`);
+    expect(await golfer.locator("#amount").textContent()).toBe("95.00 GBP");
+    await golfer.getByRole("button", { name: "Pay" }).click();
+    await golfer.waitForURL(`${BASE}/book/${w.studioA.slug}/bookings?paid=*`);
+    const card = golfer.locator("[data-booking]");
+    await card.locator('[data-payment="paid"]').waitFor();
+    expect(await card.locator("[data-status]").getAttribute("data-status")).toBe("requested");
+
+    const fitter = await (await browser.newContext()).newPage();
+    await signInThroughForm(fitter, w.fitter.email);
+    await fitter.goto(`${BASE}/studio/calendar?week=${slot.day}`);
+    const visit = fitter.locator("[data-booking]", { hasText: "Booker Test" });
+    expect(await visit.locator("[data-payment]").getAttribute("data-payment")).toBe("paid");
+    await visit.getByRole("button", { name: "Confirm" }).click();
+    await visit.locator('[data-status="confirmed"]').waitFor();
+
+    await golfer.goto(`${BASE}/book/${w.studioA.slug}/bookings`);
+    await golfer.locator('[data-booking] [data-status="confirmed"]').waitFor();
+    expect(await golfer.locator("[data-booking] [data-payment]").getAttribute("data-payment")).toBe("paid");
+    await golfer.goto(`${BASE}/me`);
+    const fittings = golfer.getByRole("region", { name: "Your fittings" });
+    expect(await fittings.locator("li").count()).toBe(1);
+    expect(await fittings.locator("li").textContent()).toContain("booked");
+  });
+});
