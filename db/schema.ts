@@ -248,3 +248,137 @@ export const specs = pgTable("specs", {
   // A frozen copy: once issued, a spec is never edited; a new spec supersedes it.
   data: jsonb("data").$type<Record<string, unknown>>().notNull(),
 }, (t) => [index("specs_golfer_issued_idx").on(t.golferId, t.issuedAt)]);
+
+// --- Booking and fees ---
+// Opening hours and closed days are kept in the studio's local time (studios.time_zone);
+// bookings and payments are instants in UTC. The no-double-booking rule is an exclusion
+// constraint on (fitter, [starts_at, blocked_until)) added by hand in the booking migration.
+export const bookingStatusEnum = pgEnum("booking_status", ["requested", "confirmed", "declined", "cancelled"]);
+export const paymentStateEnum = pgEnum("payment_state", ["pending", "paid", "refund_pending", "refunded"]);
+
+export const bookingSettings = pgTable("booking_settings", {
+  studioId: uuid("studio_id").primaryKey().references(() => studios.id, { onDelete: "cascade" }),
+  // A cancellation at least this long before the start is refunded; a reschedule needs it too.
+  cancelNoticeHours: integer("cancel_notice_hours").notNull().default(48),
+  currency: text("currency").notNull().default("gbp"),
+  ...timestamps,
+});
+
+export const fittingTypes = pgTable("fitting_types", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  name: text("name").notNull(),
+  durationMin: integer("duration_min").notNull(),
+  bufferMin: integer("buffer_min").notNull().default(0),
+  feeMinor: integer("fee_minor").notNull(),
+  active: boolean("active").notNull().default(true),
+  ...timestamps,
+}, (t) => [index("fitting_types_studio_idx").on(t.studioId, t.name)]);
+
+export const availabilityRules = pgTable("availability_rules", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  fitterUserId: uuid("fitter_user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  weekday: integer("weekday").notNull(), // ISO: 1 = Monday … 7 = Sunday
+  startMinute: integer("start_minute").notNull(), // minutes after local midnight
+  endMinute: integer("end_minute").notNull(),
+}, (t) => [index("availability_rules_fitter_idx").on(t.fitterUserId, t.weekday)]);
+
+export const closedDays = pgTable("closed_days", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  // null: the whole studio is closed that day.
+  fitterUserId: uuid("fitter_user_id").references(() => users.id, { onDelete: "cascade" }),
+  day: text("day").notNull(), // local date, yyyy-mm-dd
+  reason: text("reason").notNull().default(""),
+}, (t) => [index("closed_days_studio_day_idx").on(t.studioId, t.day)]);
+
+export const bookings = pgTable("bookings", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  golferId: uuid("golfer_id").notNull().references(() => golfers.id, { onDelete: "cascade" }),
+  fitterUserId: uuid("fitter_user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  fittingTypeId: uuid("fitting_type_id").notNull().references(() => fittingTypes.id, { onDelete: "restrict" }),
+  fittingId: uuid("fitting_id").references(() => fittings.id, { onDelete: "set null" }),
+  startsAt: timestamp("starts_at", { withTimezone: true }).notNull(),
+  endsAt: timestamp("ends_at", { withTimezone: true }).notNull(),
+  // End plus the fitter's buffer: the span no other booking of the fitter may overlap.
+  blockedUntil: timestamp("blocked_until", { withTimezone: true }).notNull(),
+  status: bookingStatusEnum("status").notNull().default("requested"),
+  feeMinor: integer("fee_minor").notNull(),
+  currency: text("currency").notNull(),
+  creditTowardOrder: boolean("credit_toward_order").notNull().default(true),
+  intake: jsonb("intake").$type<GolferIntake>().notNull().default({}),
+  reminderSentAt: timestamp("reminder_sent_at", { withTimezone: true }),
+  ...timestamps,
+}, (t) => [
+  index("bookings_studio_starts_idx").on(t.studioId, t.startsAt),
+  index("bookings_golfer_starts_idx").on(t.golferId, t.startsAt),
+]);
+
+export const payments = pgTable("payments", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  bookingId: uuid("booking_id").notNull().references(() => bookings.id, { onDelete: "cascade" }),
+  provider: text("provider").notNull().default("stripe"),
+  checkoutSessionId: text("checkout_session_id").notNull().unique(),
+  paymentIntentId: text("payment_intent_id").unique(),
+  refundId: text("refund_id"),
+  amountMinor: integer("amount_minor").notNull(),
+  currency: text("currency").notNull(),
+  state: paymentStateEnum("state").notNull().default("pending"),
+  paidAt: timestamp("paid_at", { withTimezone: true }),
+  refundedAt: timestamp("refunded_at", { withTimezone: true }),
+  ...timestamps,
+}, (t) => [index("payments_booking_idx").on(t.bookingId, t.createdAt)]);
+
+// Every provider event applied once: a replayed event id is ignored.
+export const paymentEvents = pgTable("payment_events", {
+  eventId: text("event_id").primaryKey(),
+  type: text("type").notNull(),
+  receivedAt: timestamp("received_at", { withTimezone: true }).notNull().defaultNow(),
+});
+
+// --- Invitations and comments ---
+export const invitationRoleEnum = pgEnum("invitation_role", ["golfer", "coach"]);
+
+// A single-use link sent by e-mail; only the SHA-256 of the token is kept.
+export const invitations = pgTable("invitations", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  tokenHash: text("token_hash").notNull().unique(),
+  email: text("email").notNull(),
+  name: text("name").notNull(),
+  role: invitationRoleEnum("role").notNull(),
+  // The golfer an invitation is for (a golfer invitation links the account to this row).
+  golferId: uuid("golfer_id").references(() => golfers.id, { onDelete: "cascade" }),
+  invitedBy: uuid("invited_by").references(() => users.id, { onDelete: "set null" }),
+  userId: uuid("user_id").references(() => users.id, { onDelete: "set null" }),
+  expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+  usedAt: timestamp("used_at", { withTimezone: true }),
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [index("invitations_studio_created_idx").on(t.studioId, t.createdAt)]);
+
+// Up to when each person has read a clip's comments (for unread counts).
+export const commentReads = pgTable("comment_reads", {
+  userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  clipId: uuid("clip_id").notNull().references(() => clips.id, { onDelete: "cascade" }),
+  readAt: timestamp("read_at", { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [primaryKey({ columns: [t.userId, t.clipId] })]);
+
+// One row per (recipient, comment) still to be e-mailed; the worker batches them per clip.
+export const commentMailOutbox = pgTable("comment_mail_outbox", {
+  recipientUserId: uuid("recipient_user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  commentId: uuid("comment_id").notNull().references(() => comments.id, { onDelete: "cascade" }),
+  clipId: uuid("clip_id").notNull().references(() => clips.id, { onDelete: "cascade" }),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  sentAt: timestamp("sent_at", { withTimezone: true }),
+}, (t) => [primaryKey({ columns: [t.recipientUserId, t.commentId] }), index("comment_mail_outbox_pending_idx").on(t.sentAt, t.recipientUserId, t.clipId)]);
+
+// When each person was last e-mailed about a clip: at most one e-mail per window.
+export const commentMailSent = pgTable("comment_mail_sent", {
+  recipientUserId: uuid("recipient_user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  clipId: uuid("clip_id").notNull().references(() => clips.id, { onDelete: "cascade" }),
+  lastSentAt: timestamp("last_sent_at", { withTimezone: true }).notNull(),
+}, (t) => [primaryKey({ columns: [t.recipientUserId, t.clipId] })]);

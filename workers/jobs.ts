@@ -3,7 +3,10 @@
 import type PgBoss from "pg-boss";
 import { CLIP_PROCESS_QUEUE, clipProcessPayload, clipProcessPolicy } from "@/lib/jobs/clip-process";
 import { runClipJob } from "./clip-job";
+import { sendAllDueReminders } from "@/lib/server/dal/bookings";
 import { startCommentMail } from "./comment-mail";
+
+const REMINDER_QUEUE = "booking-reminders";
 
 /** Running jobs' controllers: aborted on shutdown or expiry, which kills their ffmpeg. */
 export const running = new Set<AbortController>();
@@ -31,4 +34,11 @@ export async function registerJobs(boss: PgBoss, concurrency: number): Promise<v
   }
   // Batched comment e-mails: a polling loop over the outbox table (no queue needed).
   startCommentMail();
+  // Visit reminders: every 15 minutes one worker (pg-boss picks it) mails the next day's visits.
+  await boss.createQueue(REMINDER_QUEUE, { name: REMINDER_QUEUE });
+  await boss.schedule(REMINDER_QUEUE, "*/15 * * * *");
+  await boss.work(REMINDER_QUEUE, async () => {
+    const { sent } = await sendAllDueReminders();
+    if (sent > 0) console.log(JSON.stringify({ event: "booking_reminders", sent }));
+  });
 }

@@ -20,6 +20,16 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default("Fitframe <no-reply@fitframe.local>"),
   UPLOAD_MAX_BYTES: z.coerce.number().int().positive().default(1024 * 1024 * 1024),
   WORKER_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(1),
+  // Comment e-mails: at most one per person per clip in this many seconds; the worker looks every poll.
+  COMMENT_MAIL_WINDOW_S: z.coerce.number().int().min(1).default(600),
+  COMMENT_MAIL_POLL_S: z.coerce.number().positive().default(2),
+  // Payments: the official Stripe SDK; locally pointed at scripts/payments-fake.ts on loopback.
+  STRIPE_SECRET_KEY: z.string().min(1).default("sk_test_fitframe_local"),
+  STRIPE_WEBHOOK_SECRET: z.string().min(1).default("whsec_fitframe_local_only"),
+  STRIPE_API_HOST: z.string().min(1).default("127.0.0.1"),
+  STRIPE_API_PORT: z.coerce.number().int().positive().optional(),
+  STRIPE_API_PROTOCOL: z.enum(["http", "https"]).default("http"),
+  PAYMENTS_PORT: z.coerce.number().int().positive().default(4242),
 });
 
 export type Env = z.infer<typeof envSchema>;

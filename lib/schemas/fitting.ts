@@ -35,3 +35,32 @@ export const buildFieldsSchema = z.object({
 });
 
 export const buildUpdateSchema = buildFieldsSchema.partial();
+
+/** Duplicate a build with one thing changed (or none): the copy goes at the end. */
+export const buildDuplicateSchema = z.object({
+  label: z.string().trim().min(1).max(100).optional(),
+  change: buildUpdateSchema.omit({ label: true }).default({}),
+});
+
+/** The build-shop sheet: what the shop needs to assemble the putter. Fields left out come from the build. */
+const shopText = (max: number) => z.string().trim().max(max).optional();
+export const buildShopSchema = z.object({
+  head: shopText(200),
+  neck: shopText(100),
+  lengthIn: buildFieldsSchema.shape.lengthIn,
+  lieDeg: buildFieldsSchema.shape.lieDeg,
+  loftDeg: buildFieldsSchema.shape.loftDeg,
+  grip: shopText(200),
+  gripOrientation: shopText(200),
+  headMassG: buildFieldsSchema.shape.headMassG,
+  swingWeight: shopText(40),
+  finishNotes: shopText(2000),
+});
+
+export const specIssueSchema = z.object({
+  buildId: z.string().uuid(),
+  notes: z.string().max(4000).default(""),
+  buildShop: buildShopSchema.default({}),
+  sendEmail: z.boolean().default(true),
+});
+

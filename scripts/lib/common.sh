@@ -131,6 +131,7 @@ start_mail_catcher() {
 
 # The payment provider's local fake (scripts/payments-fake.ts); the app's Stripe SDK points here.
 start_payments_fake() {
+  export PAYMENTS_PORT="${PAYMENTS_PORT:-4242}"
   export STRIPE_API_PORT="${STRIPE_API_PORT:-$PAYMENTS_PORT}"
   spawn payments node --import tsx "$ROOT/scripts/payments-fake.ts"
   wait_for_port "$PAYMENTS_PORT" payments

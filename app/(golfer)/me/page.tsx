@@ -2,6 +2,10 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { SignOutButton } from "@/components/auth/sign-out-button";
 import { PrivacyNote } from "@/components/layout/privacy-note";
+import { GolferDataControls } from "@/components/golfers/golfer-data-controls";
+import { GolferSpecCard } from "@/components/specs/golfer-spec-card";
+import { UnreadSummary } from "@/components/comments/unread-summary";
+import Link from "next/link";
 import { requirePageActor } from "@/lib/server/access";
 import { listFittingsOfGolfer } from "@/lib/server/dal/fittings";
 import { getGolfer } from "@/lib/server/dal/golfers";
@@ -17,7 +21,6 @@ export default async function GolferHome() {
     listFittingsOfGolfer(actor, actor.golferId),
     listSpecsOfGolfer(actor, actor.golferId),
   ]);
-  const current = specs.find((s) => !s.supersededAt);
   return (
     <main className="mx-auto flex max-w-xl flex-col gap-6 p-4">
       <header className="flex items-center justify-between">
@@ -25,10 +28,8 @@ export default async function GolferHome() {
         <SignOutButton />
       </header>
       <h1 className="text-title">Hello, {golfer.name.split(" ")[0]}</h1>
-      <section className="card" aria-labelledby="spec-heading">
-        <h2 id="spec-heading" className="field-label">Your putter spec</h2>
-        <p className="text-slate-600">{current ? `Issued ${current.issuedAt.toLocaleDateString("en-GB")}` : "No spec issued yet."}</p>
-      </section>
+      <UnreadSummary actor={actor} />
+      <GolferSpecCard specs={specs} />
       <section className="card" aria-labelledby="fittings-heading">
         <h2 id="fittings-heading" className="field-label">Your fittings</h2>
         {fittings.length === 0 ? (
@@ -37,13 +38,14 @@ export default async function GolferHome() {
           <ul className="divide-y divide-chalk-200">
             {fittings.map((f) => (
               <li key={f.id} className="flex min-h-touch items-center justify-between">
-                <span className="num">{f.scheduledAt.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })}</span>
+                <Link href={`/me/fittings/${f.id}`} className="num flex min-h-touch grow items-center underline-offset-2 hover:underline">{f.scheduledAt.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })}</Link>
                 <span className="text-label text-slate-600">{f.status === "completed" ? "done" : f.status === "planned" ? "booked" : "in progress"}</span>
               </li>
             ))}
           </ul>
         )}
       </section>
+      <GolferDataControls golferId={golfer.id} golferName={golfer.name} canErase afterErase="/sign-in" />
       <PrivacyNote />
     </main>
   );

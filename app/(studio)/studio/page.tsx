@@ -6,6 +6,8 @@ import { listClipsNeedingMarks } from "@/lib/server/dal/studio";
 import { GolferList } from "@/components/studio/golfer-list";
 import { TodayList } from "@/components/studio/today-list";
 import { ClipsToMark } from "@/components/studio/clips-to-mark";
+import { UnreadSummary } from "@/components/comments/unread-summary";
+import { CoachFittings } from "@/components/phone/coach-fittings";
 
 export const metadata: Metadata = { title: "Studio" };
 
@@ -25,6 +27,8 @@ export default async function StudioHome() {
       <h1 className="text-title lg:col-span-3">{staff ? "Today in the studio" : "Golfers shared with you"}</h1>
       {staff && <TodayList items={today} />}
       {staff && <ClipsToMark items={toMark} />}
+      {actor.role === "coach" && <UnreadSummary actor={actor} />}
+      {actor.role === "coach" && <CoachFittings actor={actor} />}
       <GolferList golfers={golfers.golfers} total={golfers.total} />
     </div>
   );

@@ -181,13 +181,22 @@ export async function rescheduleBooking(actor: SignedInActor, id: string, input:
   }
 }
 
-/** Reminders for confirmed visits starting within the next `hours` that have not had one. */
+/** Reminders for the actor's studio: confirmed visits within the next `hours` not yet reminded. */
 export async function sendDueReminders(actor: SignedInActor, hours = 24) {
   assertStudio(actor, "bookings.manage");
+  return remindDue(hours, eq(bookings.studioId, actor.studioId));
+}
+
+/** The worker's scheduled run over every studio (no actor: it is the operator's own task). */
+export async function sendAllDueReminders(hours = 24) {
+  return remindDue(hours);
+}
+
+async function remindDue(hours: number, scope?: SQL) {
   const now = new Date();
   // Claiming the rows first means two runs side by side never remind twice.
   const claimed = await db.update(bookings).set({ reminderSentAt: now }).where(and(
-    eq(bookings.studioId, actor.studioId), eq(bookings.status, "confirmed"), isNull(bookings.reminderSentAt),
+    scope, eq(bookings.status, "confirmed"), isNull(bookings.reminderSentAt),
     gte(bookings.startsAt, now), lt(bookings.startsAt, new Date(now.getTime() + hours * 3_600_000)),
   )).returning({ id: bookings.id });
   let sent = 0;

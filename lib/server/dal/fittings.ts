@@ -1,13 +1,14 @@
 import "server-only";
-import { and, asc, desc, eq, gte, lt } from "drizzle-orm";
+import { and, asc, count, desc, eq, gte, lt } from "drizzle-orm";
 import type { z } from "zod";
 import { db, schema } from "@/db";
+import { withChecks } from "@/lib/compare/build-checks";
 import type { fittingCreateSchema, fittingUpdateSchema } from "@/lib/schemas/fitting";
 import { assertGolfer, assertStudio, type SignedInActor } from "../access";
 import { notFound } from "../http/errors";
 import { getGolfer } from "./golfers";
 
-const { fittings, builds, golfers } = schema;
+const { fittings, builds, golfers, clips } = schema;
 
 async function loadFitting(actor: SignedInActor, id: string) {
   const [row] = await db.select().from(fittings).where(eq(fittings.id, id));
@@ -19,7 +20,16 @@ async function loadFitting(actor: SignedInActor, id: string) {
 export async function getFitting(actor: SignedInActor, id: string) {
   const fitting = await loadFitting(actor, id);
   const buildRows = await db.select().from(builds).where(eq(builds.fittingId, id)).orderBy(asc(builds.position));
-  return { ...fitting, builds: buildRows };
+  return { ...fitting, builds: buildRows.map(withChecks) };
+}
+
+/** The fitting page: the fitting, its golfer, builds with checks and how many clips each has. */
+export async function getFittingPage(actor: SignedInActor, id: string) {
+  const fitting = await getFitting(actor, id);
+  const [golfer] = await db.select().from(golfers).where(eq(golfers.id, fitting.golferId));
+  const counts = await db.select({ buildId: clips.buildId, n: count() }).from(clips).where(eq(clips.fittingId, id)).groupBy(clips.buildId);
+  const clipCount = new Map(counts.map((c) => [c.buildId, c.n]));
+  return { fitting, golfer: golfer!, builds: fitting.builds.map((b) => ({ ...b, clipCount: clipCount.get(b.id) ?? 0 })) };
 }
 
 /** For writes below a fitting (builds, clips): the fitting, once the actor may change it. */

@@ -1,0 +1,17 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { IntakeForm } from "@/components/golfers/intake-form";
+import { requirePageActor } from "@/lib/server/access";
+
+export const metadata: Metadata = { title: "Add golfer" };
+
+export default async function NewGolferPage() {
+  const actor = await requirePageActor();
+  if (actor.role !== "admin" && actor.role !== "fitter") notFound();
+  return (
+    <div className="card">
+      <h1 className="mb-4 text-title">Add a golfer</h1>
+      <IntakeForm />
+    </div>
+  );
+}

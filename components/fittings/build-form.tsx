@@ -1,0 +1,59 @@
+"use client";
+// Adds a build to the fitting. Units: length in inches to 0.25, lie and loft in degrees to 0.5, masses in grams.
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm, type FieldPath } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import type { z } from "zod";
+import { ApiClientError, apiFetch } from "@/lib/client/api";
+import { buildFieldsSchema } from "@/lib/schemas/fitting";
+import { asOptionalNumber, FormField } from "@/components/golfers/form-field";
+import { BUILD_FIELDS, isNumericField } from "./build-fields";
+
+type Input = z.input<typeof buildFieldsSchema>;
+type Output = z.output<typeof buildFieldsSchema>;
+
+export function BuildForm({ fittingId, first }: { fittingId: string; first: boolean }) {
+  const router = useRouter();
+  const [status, setStatus] = useState<string | null>(null);
+  const { register, handleSubmit, setError, reset, formState } = useForm<Input, unknown, Output>({
+    resolver: zodResolver(buildFieldsSchema),
+    defaultValues: { label: first ? "Own putter" : "", isBaseline: first },
+  });
+  const onSubmit = handleSubmit(async (values) => {
+    setStatus(null);
+    try {
+      const build = await apiFetch<{ label: string; warnings: { message: string }[] }>(`/api/fittings/${fittingId}/builds`, { method: "POST", body: values });
+      reset({ label: "", isBaseline: false });
+      setStatus(`Added ${build.label}.${build.warnings.length ? ` Check the equipment rules: ${build.warnings.map((w) => w.message).join(" ")}` : ""}`);
+      router.refresh();
+    } catch (e) {
+      if (e instanceof ApiClientError && e.issues) for (const i of e.issues) setError(i.path as FieldPath<Input>, { message: i.message });
+      setStatus(e instanceof Error ? `Not added: ${e.message}` : "Not added.");
+    }
+  });
+  const err = (k: string) => (formState.errors as Record<string, { message?: string } | undefined>)[k]?.message;
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+      <div className="grid gap-3 sm:grid-cols-3 lg:grid-cols-5">
+        <FormField id="build-label" label="Name of the build" error={err("label")} {...register("label")} />
+        {BUILD_FIELDS.map((f) => (
+          <FormField
+            key={f.key}
+            id={`build-${f.key}`}
+            label={f.unit ? `${f.label} (${f.unit})` : f.label}
+            type={isNumericField(f) ? "number" : "text"}
+            step={f.step}
+            error={err(f.key)}
+            {...register(f.key, isNumericField(f) ? { setValueAs: (v) => asOptionalNumber(v) ?? null } : {})}
+          />
+        ))}
+      </div>
+      <label className="flex min-h-touch items-center gap-2"><input type="checkbox" {...register("isBaseline")} /> The golfer&apos;s own putter (baseline)</label>
+      <div className="flex items-center gap-4">
+        <button type="submit" className="btn-primary" disabled={formState.isSubmitting}>Add build</button>
+        {status && <p role="status" className="text-slate-600">{status}</p>}
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,23 @@
+import { holingWindowDeg, makeProbability } from "@/lib/physics/holing";
+import { METRES_PER_FOOT } from "@/lib/physics/units";
+import type { Summary } from "@/lib/stats/summary";
+
+export const MAKE_DISTANCES_FT = [3, 6, 10, 20] as const;
+
+export type MakeChance = { distanceFt: number; windowDeg: number; probability: number | null };
+
+/**
+ * Make probability at each distance from a build's start direction, taken as Normal(mean, sd)
+ * (derived: the holing window atan(r/D) of lib/physics/holing). Null below two putts or with no spread.
+ */
+export function makeChances(startDirection: Summary | null, distancesFt: readonly number[] = MAKE_DISTANCES_FT): MakeChance[] {
+  return distancesFt.map((distanceFt) => {
+    const distanceM = distanceFt * METRES_PER_FOOT;
+    const usable = startDirection && startDirection.sd !== null && startDirection.sd > 0;
+    return {
+      distanceFt,
+      windowDeg: holingWindowDeg(distanceM),
+      probability: usable ? makeProbability(distanceM, startDirection.mean, startDirection.sd!) : null,
+    };
+  });
+}

@@ -1,0 +1,42 @@
+import { percent, signedDeg } from "./format";
+import type { SpecData } from "./spec-data";
+
+export type SpecSection = { title: string; rows: [string, string][] };
+
+const num = (v: number | null, unit: string, digits = 2) => (v === null ? "—" : `${Number(v.toFixed(digits))}${unit}`);
+const text = (v: string) => (v.trim() === "" ? "—" : v);
+const valueOf = (v: number, unit: string) => (unit === "deg" ? signedDeg(v) : `${v.toFixed(2)} ${unit}`);
+const spreadOf = (v: number, unit: string) => (unit === "deg" ? `${v.toFixed(1)}°` : `${v.toFixed(2)} ${unit}`);
+
+/** The spec as labelled lines, shared by the printable page, the PDF and the e-mail. */
+export function specLines(spec: SpecData) {
+  const s = spec.buildShop;
+  const sections: SpecSection[] = [
+    {
+      title: "Build shop",
+      rows: [
+        ["Head", text(s.head)], ["Neck", text(s.neck)], ["Length", num(s.lengthIn, " in")], ["Lie", num(s.lieDeg, "°", 1)],
+        ["Loft", num(s.loftDeg, "°", 1)], ["Grip", text(s.grip)], ["Grip orientation", text(s.gripOrientation)],
+        ["Head mass", num(s.headMassG, " g", 1)], ["Swing weight", text(s.swingWeight)], ["Finish notes", text(s.finishNotes)],
+      ],
+    },
+  ];
+  if (spec.keyMeasurements.length > 0) {
+    sections.push({
+      title: `Measured with this build (${spec.build.label})`,
+      rows: spec.keyMeasurements.map((m) => [
+        m.label,
+        `mean ${valueOf(m.mean, m.unit)}${m.sd === null ? "" : `, spread ${spreadOf(m.sd, m.unit)}`}, ${m.n} putts${m.shareInWindow === null ? "" : `, ${percent(m.shareInWindow)} in window`}`,
+      ]),
+    });
+  }
+  const chances = spec.makeChances.filter((c) => c.probability !== null);
+  if (chances.length > 0) sections.push({ title: "Estimated share holed (from start direction)", rows: chances.map((c) => [`${c.distanceFt} ft`, percent(c.probability!)]) });
+  if (spec.warnings.length > 0) sections.push({ title: "Equipment rules", rows: spec.warnings.map((w) => [w.rule, w.message]) });
+  if (spec.notes.trim()) sections.push({ title: "Notes", rows: [["Fitter's notes", spec.notes]] });
+  return {
+    subtitle: `${spec.studioName} · fitting of ${new Date(spec.fitting.date).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })} · issued ${new Date(spec.issuedAt).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })} by ${spec.issuedBy} · ${spec.golfer.handedness}-handed`,
+    sections,
+    footer: "This spec records the putter chosen at the fitting; it measures equipment and strokes and gives no medical advice.",
+  };
+}

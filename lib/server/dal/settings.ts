@@ -1,0 +1,26 @@
+import "server-only";
+import { eq } from "drizzle-orm";
+import { db, schema } from "@/db";
+import type { StudioSettings } from "@/db/schema";
+import type { StudioSettingsInput } from "@/lib/schemas/settings";
+import { assertStudio, type SignedInActor } from "../access";
+
+const { studios } = schema;
+
+/** A studio's settings for the server's own use (windows for a comparison, units for a spec). */
+export async function settingsOfStudio(studioId: string): Promise<StudioSettings> {
+  const [row] = await db.select({ settings: studios.settings }).from(studios).where(eq(studios.id, studioId));
+  return row!.settings;
+}
+
+/** The settings page and API: admins only. */
+export async function getStudioSettings(actor: SignedInActor) {
+  assertStudio(actor, "studio.settings");
+  return settingsOfStudio(actor.studioId);
+}
+
+export async function updateStudioSettings(actor: SignedInActor, input: StudioSettingsInput) {
+  assertStudio(actor, "studio.settings");
+  const [row] = await db.update(studios).set({ settings: input, updatedAt: new Date() }).where(eq(studios.id, actor.studioId)).returning({ settings: studios.settings });
+  return row!.settings;
+}

@@ -1,0 +1,135 @@
+// The fitting workflow in Chromium: a fitter adds a golfer with intake (a failed submit keeps what
+// was typed), books a fitting, adds two builds, compares them, issues the spec, and the golfer signs
+// in and reads it. Clips: the upload screen is not part of this workflow yet, so ready clips and
+// their measurements are written straight into the database (as the marking screen would).
+import bcrypt from "bcryptjs";
+import { asc, eq } from "drizzle-orm";
+import type { Browser, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { db, schema } from "@/db";
+import { launchBrowser } from "../support/browser";
+import { BASE } from "../support/http";
+import { makeWorld, PASSWORD, type World } from "../support/world";
+
+let browser: Browser;
+let w: World;
+
+beforeAll(async () => {
+  [browser, w] = await Promise.all([launchBrowser(), makeWorld()]);
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function signInAs(email: string) {
+  const page = await browser.newPage();
+  await page.goto(`${BASE}/sign-in`);
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(PASSWORD);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((u) => u.pathname !== "/sign-in");
+  return page;
+}
+
+async function addBuild(page: Page, label: string, fields: Record<string, string>) {
+  await page.locator("#build-label").fill(label);
+  for (const [key, value] of Object.entries(fields)) await page.locator(`#build-${key}`).fill(value);
+  await page.getByRole("button", { name: "Add build" }).click();
+  await page.getByRole("status").filter({ hasText: `Added ${label}` }).waitFor();
+}
+
+async function addReadyClips(studioId: string, fittingId: string, buildId: string, faces: number[]) {
+  for (const [i, face] of faces.entries()) {
+    const [clip] = await db
+      .insert(schema.clips)
+      .values({ studioId, fittingId, buildId, view: "overhead", state: "ready", originalName: `p${i}.mp4`, contentType: "video/mp4", sizeBytes: 1, objectKey: `studios/${studioId}/clips/x${i}/source`, captureFps: 240, createdAt: new Date(Date.UTC(2026, 0, 1, 10, i)) })
+      .returning();
+    await db.insert(schema.measurements).values([
+      { studioId, clipId: clip!.id, key: "face_angle_impact", value: face, unit: "deg" },
+      { studioId, clipId: clip!.id, key: "start_direction", value: face * 0.8, unit: "deg" },
+      { studioId, clipId: clip!.id, key: "path", value: 0.5, unit: "deg" },
+    ]);
+  }
+}
+
+describe("fitting workflow", () => {
+  const golferName = `Nora Quill ${Date.now()}`;
+  const golferEmail = `nora.${Date.now()}@test.fitframe`;
+  let specPath = "";
+
+  it("a fitter adds a golfer, a fitting, two builds; compares; issues the spec", async () => {
+    const page = await signInAs(w.fitter.email);
+    await page.goto(`${BASE}/studio/golfers/new`);
+    await page.getByLabel("Name", { exact: true }).fill(golferName);
+    await page.getByLabel("E-mail (for the spec and sign-in)").fill(golferEmail);
+    await page.getByLabel("Putting style").fill("claw");
+    await page.getByLabel("Green speed at home (ft)").fill("40");
+    await page.getByLabel("Consent to record video has been given").check();
+    await page.getByRole("button", { name: "Add golfer" }).click();
+    // the error is tied to its field and nothing typed is lost
+    const speed = page.getByLabel("Green speed at home (ft)");
+    await expect.poll(() => speed.getAttribute("aria-invalid")).toBe("true");
+    const describedBy = (await speed.getAttribute("aria-describedby"))!.split(" ");
+    expect(await page.locator(`#${describedBy.at(-1)}`).textContent()).toContain("at most 16");
+    expect(await page.getByLabel("Name", { exact: true }).inputValue()).toBe(golferName);
+    expect(await page.getByLabel("Putting style").inputValue()).toBe("claw");
+    await speed.fill("10.5");
+    await page.getByRole("button", { name: "Add golfer" }).click();
+    await page.waitForURL(/\/studio\/golfers\/[0-9a-f-]{36}$/);
+    expect(await page.getByRole("heading", { level: 1 }).textContent()).toBe(golferName);
+    expect(await page.locator("main").textContent()).toContain("video consent given");
+
+    await page.getByRole("button", { name: "New fitting" }).click();
+    await page.waitForURL(/\/studio\/fittings\/[0-9a-f-]{36}$/);
+    const fittingId = page.url().split("/").pop()!;
+    await addBuild(page, "Own putter", { lengthIn: "35", lieDeg: "70", loftDeg: "3", headMassG: "340" });
+    await addBuild(page, "Mallet 34", { headModel: "Mallet M2", lengthIn: "34", lieDeg: "71", loftDeg: "2.5", headMassG: "360", gripName: "Pistol 60", gripMassG: "60", shaftMassG: "110" });
+    await page.getByRole("listitem").filter({ hasText: "Mallet 34" }).waitFor();
+
+    const [fitting] = await db.select().from(schema.fittings).where(eq(schema.fittings.id, fittingId));
+    const builds = await db.select().from(schema.builds).where(eq(schema.builds.fittingId, fittingId)).orderBy(asc(schema.builds.position));
+    expect(builds.map((b) => b.label)).toEqual(["Own putter", "Mallet 34"]);
+    await addReadyClips(fitting!.studioId, fittingId, builds[0]!.id, [1.8, -1.2, 0.9, 2.1]);
+    await addReadyClips(fitting!.studioId, fittingId, builds[1]!.id, [0.2, -0.1, 0.3, -0.2, 0.1]);
+
+    await page.reload();
+    const suggestion = page.getByRole("region", { name: /Suggested from the numbers/ });
+    await suggestion.waitFor();
+    expect(await suggestion.textContent()).toContain("Mallet 34");
+    const stats = page.getByRole("region", { name: "Consistency per measurement" });
+    expect(await stats.textContent()).toContain("Face angle at impact");
+    expect(await page.getByText("Face angle at impact, putt by putt").count()).toBe(1);
+    await page.locator(".recharts-surface").first().waitFor();
+
+    await page.getByLabel("Build", { exact: true }).selectOption({ label: "Mallet 34" });
+    await page.getByLabel("Grip orientation").fill("flat side up");
+    await page.getByRole("button", { name: "Issue spec" }).click();
+    const done = page.getByRole("status").filter({ hasText: "Spec issued" });
+    await done.waitFor();
+    expect(await done.textContent()).toContain(`e-mailed to ${golferEmail}`);
+    specPath = (await done.getByRole("link", { name: "Printable page" }).getAttribute("href"))!;
+    await page.goto(`${BASE}${specPath}`);
+    expect(await page.locator("article").textContent()).toContain("flat side up");
+    await page.close();
+  });
+
+  it("the golfer signs in and reads the spec", async () => {
+    const [golfer] = await db.select().from(schema.golfers).where(eq(schema.golfers.email, golferEmail));
+    const [account] = await db
+      .insert(schema.users)
+      .values({ studioId: golfer!.studioId, role: "golfer", email: golferEmail, name: golferName, passwordHash: bcrypt.hashSync(PASSWORD, 4) })
+      .returning();
+    await db.update(schema.golfers).set({ userId: account!.id }).where(eq(schema.golfers.id, golfer!.id));
+    const page = await signInAs(golferEmail);
+    await page.waitForURL(`${BASE}/me`);
+    const card = page.getByRole("region", { name: "Your putter spec" });
+    expect(await card.textContent()).toContain("Mallet M2");
+    await card.getByRole("link", { name: "Read the spec" }).click();
+    await page.waitForURL(/\/me\/specs\//);
+    const sheet = await page.locator("article").textContent();
+    expect(sheet).toContain(golferName);
+    expect(sheet).toContain("34 in");
+    expect(sheet).toContain("flat side up");
+    await page.close();
+  });
+});

@@ -1,0 +1,47 @@
+import { describe, expect, it } from "vitest";
+import { csvText, measurementsCsv, MEASUREMENT_CSV_HEADER } from "@/lib/compare/csv";
+import { freezeSpec, type SpecBuild } from "@/lib/compare/spec-data";
+
+describe("measurements CSV (RFC 4180)", () => {
+  const row = { fittingId: "f1", buildPosition: 1, buildLabel: 'Blade, "heavy"', clipId: "c1", view: "overhead", clipCreatedAt: new Date("2026-01-01T10:00:00Z"), key: "face_angle_impact", value: -0.75, unit: "deg", method: "derived" };
+  it("one line per measurement, quoted where needed, CRLF line ends, empty for a value not computed", () => {
+    const text = measurementsCsv([row, { ...row, key: "path", value: null }]);
+    expect(text.split("\r\n")).toEqual([
+      MEASUREMENT_CSV_HEADER.join(","),
+      'f1,1,"Blade, ""heavy""",c1,overhead,2026-01-01T10:00:00.000Z,face_angle_impact,-0.75,deg,derived',
+      "f1,1,\"Blade, \"\"heavy\"\"\",c1,overhead,2026-01-01T10:00:00.000Z,path,,deg,derived",
+      "",
+    ]);
+  });
+  it("a text cell that would run as a spreadsheet formula is defused (OWASP CSV injection)", () => {
+    expect(csvText("=HYPERLINK(1)")).toBe("'=HYPERLINK(1)");
+    expect(csvText("plain")).toBe("plain");
+  });
+});
+
+describe("freezing a spec", () => {
+  const build: SpecBuild = {
+    label: "Mallet 34", headModel: "Mallet M2", neckStyle: "plumber", lengthIn: 34, lieDeg: 70, loftDeg: 3, offsetIn: null, toeHang: "slight",
+    headMassG: 350, gripName: "Pistol 60", gripMassG: 60, shaftMassG: 110, balancePointIn: null, alignmentAid: "line", notes: "",
+  };
+  const input = {
+    studioName: "Studio", golfer: { name: "Ada Green", handedness: "right" as const }, fitting: { id: "f1", scheduledAt: new Date("2026-01-02T09:00:00Z"), notes: "" },
+    build, comparison: null, notes: "Keep the grip label up", buildShop: { gripOrientation: "label up", loftDeg: 2.5 }, issuedBy: "Fitter", issuedAt: new Date("2026-01-02T10:00:00Z"),
+  };
+  it("takes build-shop fields from the build unless given", () => {
+    const spec = freezeSpec(input);
+    expect(spec.buildShop).toMatchObject({ head: "Mallet M2", neck: "plumber", lengthIn: 34, lieDeg: 70, loftDeg: 2.5, grip: "Pistol 60", gripOrientation: "label up", headMassG: 350 });
+    expect(spec.swingWeight?.method).toBe("estimate");
+  });
+  it("is a copy: changing the build afterwards changes nothing in the spec", () => {
+    const spec = freezeSpec(input);
+    build.lengthIn = 35;
+    input.golfer.name = "Someone else";
+    expect(spec.build.lengthIn).toBe(34);
+    expect(spec.golfer.name).toBe("Ada Green");
+  });
+  it("carries the equipment-rule warnings of the issued numbers (Equipment Rules, Part 2: loft at most 10°)", () => {
+    expect(freezeSpec({ ...input, buildShop: { loftDeg: 10.5 } }).warnings.map((w) => w.field)).toEqual(["loftDeg"]);
+    expect(freezeSpec({ ...input, buildShop: { loftDeg: 10 } }).warnings).toEqual([]);
+  });
+});
