@@ -4,6 +4,8 @@ import { eq } from "drizzle-orm";
 import bcrypt from "bcryptjs";
 import { createHash } from "node:crypto";
 import { db, pool, schema } from "@/db";
+import { seedBookingDemo } from "@/lib/server/dal/booking-demo";
+import { seedDemoClips } from "./demo-clips";
 import { DEMO_PASSWORD, DEMO_STUDIO, DEMO_TOKEN, DEMO_USERS, defaultStudioSettings } from "./demo-data";
 
 const existing = await db.select().from(schema.studios).where(eq(schema.studios.slug, DEMO_STUDIO.slug));
@@ -11,7 +13,7 @@ if (existing.length > 0) {
   console.log("demo data already present");
 } else {
   const hash = await bcrypt.hash(DEMO_PASSWORD, 10);
-  await db.transaction(async (tx) => {
+  const demoClipsFor = await db.transaction(async (tx) => {
     const [studio] = await tx.insert(schema.studios).values({ ...DEMO_STUDIO, settings: defaultStudioSettings }).returning();
     const userIds: Record<string, string> = {};
     for (const u of DEMO_USERS) {
@@ -26,6 +28,7 @@ if (existing.length > 0) {
     });
     const coach = DEMO_USERS.find((u) => u.role === "coach")!;
     const golferUsers = DEMO_USERS.filter((u) => u.role === "golfer");
+    let firstFitting = "";
     for (const [i, g] of golferUsers.entries()) {
       const [golfer] = await tx
         .insert(schema.golfers)
@@ -44,8 +47,16 @@ if (existing.length > 0) {
       for (const [position, b] of (g.builds ?? []).entries()) {
         await tx.insert(schema.builds).values({ ...b, studioId: studio!.id, fittingId: fitting!.id, position: position + 1 });
       }
+      if (i === 0) firstFitting = fitting!.id;
     }
+    const fitterIds = DEMO_USERS.filter((u) => u.role === "fitter").map((u) => userIds[u.email]!);
+    return { studioId: studio!.id, fittingId: firstFitting, fitterIds };
   });
-  console.log("demo data created");
+  await seedBookingDemo(demoClipsFor.studioId, demoClipsFor.fitterIds);
+  console.log("demo data created; generating demo clips…");
+  await seedDemoClips(demoClipsFor.studioId, demoClipsFor.fittingId, demoClipsFor.fitterIds[0]!);
+  console.log("demo clips queued for the worker");
 }
 await pool.end();
+// The job queue client keeps a connection pool open; the seed is done.
+process.exit(0);

@@ -28,10 +28,10 @@ trap cleanup INT TERM EXIT
 start_postgres "$PG_PORT"
 ensure_database "$PG_PORT" "$DATABASE_URL"
 npx tsx scripts/migrate.ts
-node --conditions=react-server --import tsx scripts/seed.ts
 start_object_store "$(node -e 'console.log(new URL(process.argv[1]).port)' "$S3_ENDPOINT")" "$S3_BUCKET" "$NEXTAUTH_URL"
 start_mail_catcher
 start_payments_fake
+node --conditions=react-server --import tsx scripts/seed.ts
 spawn worker node --conditions=react-server --import tsx workers/index.ts
 if [ $DEV = 1 ]; then
   spawn web node node_modules/next/dist/bin/next dev -p "$WEB_PORT" -H 127.0.0.1

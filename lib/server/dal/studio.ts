@@ -6,7 +6,7 @@ import { assertStudio, type SignedInActor } from "../access";
 const { studios, clips, marks, golfers, fittings } = schema;
 
 export async function getOwnStudio(actor: SignedInActor) {
-  const [row] = await db.select({ id: studios.id, name: studios.name, timeZone: studios.timeZone }).from(studios).where(eq(studios.id, actor.studioId));
+  const [row] = await db.select({ id: studios.id, name: studios.name, slug: studios.slug, timeZone: studios.timeZone }).from(studios).where(eq(studios.id, actor.studioId));
   return row!;
 }
 
