@@ -1,26 +1,11 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
-import { redirect } from "next/navigation";
 import { db, schema } from "@/db";
 import { decideGolfer, decideStudio, type GolferPermission, type StudioPermission } from "@/lib/access/policy";
-import { currentActor, type SignedInActor } from "./auth/actor";
-import { ApiError, forbidden, notFound, unauthorized } from "./http/errors";
+import type { SignedInActor } from "./auth/actor";
+import { ApiError, forbidden, notFound } from "./http/errors";
 
 export type { SignedInActor };
-
-/** For route handlers: the actor or a 401. */
-export async function requireActor(): Promise<SignedInActor> {
-  const actor = await currentActor();
-  if (!actor) throw unauthorized();
-  return actor;
-}
-
-/** For pages: the actor or a redirect to the sign-in page. */
-export async function requirePageActor(): Promise<SignedInActor> {
-  const actor = await currentActor();
-  if (!actor) redirect("/sign-in");
-  return actor;
-}
 
 export function assertStudio(actor: SignedInActor, permission: StudioPermission): void {
   if (decideStudio(actor, permission) !== "allow") throw forbidden();

@@ -7,7 +7,7 @@ import { GolferSpecCard } from "@/components/specs/golfer-spec-card";
 import { GolferBookings } from "@/components/booking/golfer-bookings";
 import { UnreadSummary } from "@/components/comments/unread-summary";
 import Link from "next/link";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { listFittingsOfGolfer } from "@/lib/server/dal/fittings";
 import { getGolfer } from "@/lib/server/dal/golfers";
 import { listSpecsOfGolfer } from "@/lib/server/dal/specs";

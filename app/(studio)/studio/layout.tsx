@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { SignOutButton } from "@/components/auth/sign-out-button";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { getOwnStudio } from "@/lib/server/dal/studio";
 
 export default async function StudioLayout({ children }: { children: React.ReactNode }) {

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { listStudioFittingsBetween } from "@/lib/server/dal/fittings";
 import { listGolfers } from "@/lib/server/dal/golfers";
 import { listClipsNeedingMarks } from "@/lib/server/dal/studio";

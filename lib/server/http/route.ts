@@ -2,8 +2,9 @@ import "server-only";
 import { NextResponse, type NextRequest } from "next/server";
 import { z, type ZodType } from "zod";
 import { env } from "@/lib/config/env";
-import { requireActor, type SignedInActor } from "../access";
-import { ApiError, errorResponse } from "./errors";
+import type { SignedInActor } from "../access";
+import { currentActor } from "../auth/actor";
+import { ApiError, errorResponse, unauthorized } from "./errors";
 
 const MAX_JSON_BYTES = 1024 * 1024;
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
@@ -24,7 +25,8 @@ export function apiRoute<P = Record<string, never>, B = undefined, Q = undefined
   return async (request: NextRequest, context: { params: Promise<Record<string, string | string[]>> }) => {
     try {
       checkOrigin(request);
-      const actor = await requireActor();
+      const actor = await currentActor();
+      if (!actor) throw unauthorized();
       const params = options.params ? options.params.parse(await context.params) : ({} as P);
       const query = options.query
         ? options.query.parse(Object.fromEntries(request.nextUrl.searchParams.entries()))

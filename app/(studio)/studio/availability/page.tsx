@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { AvailabilityEditor } from "@/components/booking/availability-editor";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { bookingSetup } from "@/lib/server/dal/booking-setup";
 
 export const metadata: Metadata = { title: "Booking settings" };

@@ -4,7 +4,7 @@ import { notFound } from "next/navigation";
 import { DateTime } from "luxon";
 import { BookingActions } from "@/components/booking/booking-actions";
 import { money, paymentWords, statusWords } from "@/components/booking/format";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { listBookings } from "@/lib/server/dal/bookings";
 import { getOwnStudio } from "@/lib/server/dal/studio";
 

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { SettingsForm } from "@/components/settings/settings-form";
 import { METRIC_DEFINITIONS } from "@/lib/compare/metric-labels";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { getStudioSettings } from "@/lib/server/dal/settings";
 
 export const metadata: Metadata = { title: "Studio settings" };

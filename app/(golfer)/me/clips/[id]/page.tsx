@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { PhoneClipPage } from "@/components/phone/phone-clip-page";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { getPhoneClip, pageOr404 } from "@/lib/server/dal/golfer-clips";
 
 export const metadata: Metadata = { title: "Clip" };

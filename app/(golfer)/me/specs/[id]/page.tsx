@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { SpecSheet } from "@/components/specs/spec-sheet";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { getSpec } from "@/lib/server/dal/specs";
 
 export const metadata: Metadata = { title: "My putter spec" };

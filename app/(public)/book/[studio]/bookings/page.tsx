@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { GolferBookings } from "@/components/booking/golfer-bookings";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 
 export const metadata: Metadata = { title: "My bookings" };
 

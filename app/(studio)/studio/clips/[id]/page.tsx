@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { ReviewLoader } from "@/components/review/review-loader";
 import type { ReviewClip } from "@/components/review/types";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { loadClip } from "@/lib/server/dal/clip-access";
 import { ApiError } from "@/lib/server/http/errors";
 

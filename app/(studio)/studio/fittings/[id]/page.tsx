@@ -6,7 +6,7 @@ import { ComparisonPanel } from "@/components/compare/comparison-panel";
 import { BuildForm } from "@/components/fittings/build-form";
 import { BuildsBoard } from "@/components/fittings/builds-board";
 import { IssueSpecForm } from "@/components/specs/issue-spec-form";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { getFittingPage } from "@/lib/server/dal/fittings";
 import { settingsOfStudio } from "@/lib/server/dal/settings";
 

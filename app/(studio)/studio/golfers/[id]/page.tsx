@@ -4,7 +4,7 @@ import { IntakeForm } from "@/components/golfers/intake-form";
 import { NewFittingForm } from "@/components/golfers/new-fitting-form";
 import { GolferDataControls } from "@/components/golfers/golfer-data-controls";
 import { CoachAccess } from "@/components/invitations/coach-access";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { getGolferPage } from "@/lib/server/dal/golfer-page";
 
 export const metadata: Metadata = { title: "Golfer" };

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { CompareView } from "@/components/phone/compare-view";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { getComparePair, pageOr404 } from "@/lib/server/dal/golfer-clips";
 
 export const metadata: Metadata = { title: "Compare" };

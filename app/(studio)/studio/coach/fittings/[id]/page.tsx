@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { FittingClips } from "@/components/phone/fitting-clips";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { getPhoneFitting, pageOr404 } from "@/lib/server/dal/golfer-clips";
 
 export const metadata: Metadata = { title: "Fitting clips" };

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { SpecSheet } from "@/components/specs/spec-sheet";
-import { requirePageActor } from "@/lib/server/access";
+import { requirePageActor } from "@/lib/server/page-actor";
 import { getSpec } from "@/lib/server/dal/specs";
 
 export const metadata: Metadata = { title: "Spec" };
