@@ -5,7 +5,8 @@
  *   BENCH_BASE_URL=http://127.0.0.1:3000 BENCH_TOKEN=ff_… DATABASE_URL=postgres://… \
  *     node --conditions=react-server --import tsx scripts/bench/marks-save.ts
  *
- * Env: BENCH_BASE_URL, BENCH_TOKEN (a staff member's Bearer token); DATABASE_URL to create
+ * Env: BENCH_BASE_URL, BENCH_TOKEN (a staff member's Bearer token; without it a bench studio
+ * and fitter are made in the database, as `npm run bench` does); DATABASE_URL to create
  * ready clips in the token owner's studio (removed afterwards unless BENCH_KEEP=1), or
  * BENCH_CLIP_IDS=id,id… to use ready clips of yours. BENCH_MODE=patch (default: each
  * connection moves marks no other connection holds, so no version conflicts) or post (new
@@ -15,9 +16,10 @@
 import { createHash } from "node:crypto";
 import autocannon from "autocannon";
 import pg from "pg";
+import { benchStudio } from "./support";
 
 const base = required("BENCH_BASE_URL").replace(/\/$/, "");
-const token = required("BENCH_TOKEN");
+const token = process.env.BENCH_TOKEN ?? (await benchStudio()).token;
 const mode = process.env.BENCH_MODE === "post" ? "post" : "patch";
 const connections = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const duration = Number(process.env.BENCH_DURATION ?? 10);

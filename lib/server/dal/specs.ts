@@ -9,6 +9,7 @@ import { assertGolfer, type SignedInActor } from "../access";
 import { ApiError, notFound } from "../http/errors";
 import { sendMail } from "../mail";
 import { specPdf } from "../pdf/spec-pdf";
+import { feeCreditNote } from "./booking-payments";
 import { getComparison } from "./comparison";
 import { fittingForWrite } from "./fittings";
 import { getGolfer } from "./golfers";
@@ -43,13 +44,15 @@ export async function issueSpec(actor: SignedInActor, fittingId: string, input: 
     db.select({ name: studios.name }).from(studios).where(eq(studios.id, fitting.studioId)),
   ]);
   const issuedAt = new Date();
+  // A paid fitting fee credited toward the order is printed on the spec for the build shop.
+  const credit = await feeCreditNote(actor, fittingId);
   const data = freezeSpec({
     studioName: studio!.name,
     golfer: { name: golfer!.name, handedness: golfer!.handedness },
     fitting: { id: fitting.id, scheduledAt: fitting.scheduledAt, notes: fitting.notes },
     build,
     comparison: comparison.builds.find((b) => b.buildId === build.id) ?? null,
-    notes: input.notes,
+    notes: [input.notes, credit].filter(Boolean).join("\n"),
     buildShop: input.buildShop,
     issuedBy: actor.name,
     issuedAt,

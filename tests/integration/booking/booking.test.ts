@@ -165,6 +165,21 @@ describe("fee and webhook", () => {
 });
 
 describe("the studio's answer and the e-mails", () => {
+  it("a paid fee shows on the fitting page and is credited on the spec", async () => {
+    const g = await newGolfer(w.studioA.id, "credited");
+    const booking = await bookFirstSlot(g.auth);
+    const fitter = { cookie: (await signIn(w.fitter.email, PASSWORD)).cookie! };
+    expect((await call(fitter, "POST", `/api/booking/bookings/${booking.id}/confirm`)).status).toBe(200);
+    await payThroughFake(g.auth, booking.id);
+    const [fitting] = await db.select().from(schema.fittings).where(eq(schema.fittings.golferId, g.golferId));
+    const page = await call(fitter, "GET", `/studio/fittings/${fitting!.id}`);
+    expect(page.body).toContain('data-fee-state="paid"');
+    const build = await call(fitter, "POST", `/api/fittings/${fitting!.id}/builds`, { label: "Chosen" });
+    const spec = await call(fitter, "POST", `/api/fittings/${fitting!.id}/specs`, { buildId: build.body.id, notes: "Grip logo up.", sendEmail: false });
+    expect(spec.status, JSON.stringify(spec.body)).toBe(201);
+    expect(spec.body.spec.data.notes).toBe("Grip logo up.\nThe fitting fee of £95.00 is credited toward the putter order.");
+  });
+
   it("confirming sends an e-mail with a valid .ics; the visit becomes a planned fitting", async () => {
     const g = await newGolfer(w.studioA.id, "confirmed");
     const booking = await bookFirstSlot(g.auth);

@@ -3,10 +3,12 @@ import Link from "next/link";
 import { ClipList } from "@/components/clips/clip-list";
 import { ClipUploader } from "@/components/clips/clip-uploader";
 import { ComparisonPanel } from "@/components/compare/comparison-panel";
+import { FittingFee } from "@/components/booking/fitting-fee";
 import { BuildForm } from "@/components/fittings/build-form";
 import { BuildsBoard } from "@/components/fittings/builds-board";
 import { IssueSpecForm } from "@/components/specs/issue-spec-form";
 import { requirePageActor } from "@/lib/server/page-actor";
+import { bookingOfFitting } from "@/lib/server/dal/bookings";
 import { getFittingPage } from "@/lib/server/dal/fittings";
 import { settingsOfStudio } from "@/lib/server/dal/settings";
 
@@ -15,7 +17,7 @@ export const metadata: Metadata = { title: "Fitting" };
 export default async function FittingPage({ params }: { params: Promise<{ id: string }> }) {
   const actor = await requirePageActor();
   const { fitting, golfer, builds } = await getFittingPage(actor, (await params).id);
-  const settings = await settingsOfStudio(fitting.studioId);
+  const [settings, booking] = await Promise.all([settingsOfStudio(fitting.studioId), bookingOfFitting(actor, fitting.id)]);
   const staff = actor.role === "admin" || actor.role === "fitter";
   const consentConfirmed = Boolean(golfer.videoConsentAt ?? fitting.consentConfirmedAt);
   return (
@@ -25,6 +27,7 @@ export default async function FittingPage({ params }: { params: Promise<{ id: st
           <p className="text-label text-slate-600"><Link href={`/studio/golfers/${golfer.id}`}>{golfer.name}</Link> /</p>
           <h1 className="text-title">Fitting of {fitting.scheduledAt.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })}</h1>
           <p className="text-slate-600">{golfer.handedness}-handed · video consent {consentConfirmed ? "recorded" : "not recorded"}</p>
+          <FittingFee booking={booking} />
         </div>
         <a className="btn-quiet" href={`/api/fittings/${fitting.id}/csv`} download>Measurements (CSV)</a>
       </header>
