@@ -3,7 +3,7 @@
 // asks the screen to step one frame after every click.
 import type { Vec2 } from "@/lib/geometry/vector";
 import { BALL_DIAMETER_MM } from "@/lib/geometry/scale";
-import { POINTS_PER_KIND, type MarkKind, type MarkRole } from "@/lib/marks/types";
+import { POINTS_PER_KIND, type MarkInput, type MarkKind, type MarkRole } from "@/lib/marks/types";
 
 export const TOOLS = ["select", "line", "point", "angle", "ballTrack", "scale", "plane"] as const;
 export type Tool = (typeof TOOLS)[number];
@@ -32,15 +32,8 @@ export const KIND_OF_TOOL: Record<Tool, MarkKind | null> = {
 export type ToolOptions = { role: MarkRole; lengthMm: number; widthMm: number; heightMm: number };
 export const DEFAULT_TOOL_OPTIONS: Omit<ToolOptions, "role"> = { lengthMm: BALL_DIAMETER_MM, widthMm: 500, heightMm: 500 };
 
-export type MarkDraft = {
-  frame: number;
-  kind: MarkKind;
-  role: MarkRole;
-  points: Vec2[];
-  lengthMm?: number;
-  widthMm?: number;
-  heightMm?: number;
-};
+/** A finished gesture: exactly the API's mark input. */
+export type MarkDraft = MarkInput;
 
 export type ToolState = { tool: Tool; phase: "idle" } | { tool: Tool; phase: "placing"; frame: number; points: Vec2[] };
 

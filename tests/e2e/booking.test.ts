@@ -5,7 +5,7 @@
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { freeSlots, PAYMENTS_URL, withBooking, type BookingWorld } from "../integration/booking/booking-world";
-import { launchBrowser } from "../support/browser";
+import { launchBrowser, submitSignIn } from "../support/browser";
 import { BASE } from "../support/http";
 import { makeWorld, PASSWORD } from "../support/world";
 
@@ -20,10 +20,7 @@ afterAll(async () => {
 });
 
 async function signInThroughForm(page: Page, email: string) {
-  await page.goto(`${BASE}/sign-in`);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
+  await submitSignIn(page, email, PASSWORD);
   await page.waitForURL(/\/(studio|me)$/);
 }
 

@@ -7,7 +7,7 @@ import { asc, eq } from "drizzle-orm";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, schema } from "@/db";
-import { launchBrowser } from "../support/browser";
+import { launchBrowser, submitSignIn } from "../support/browser";
 import { BASE } from "../support/http";
 import { makeWorld, PASSWORD, type World } from "../support/world";
 
@@ -23,10 +23,7 @@ afterAll(async () => {
 
 async function signInAs(email: string) {
   const page = await browser.newPage();
-  await page.goto(`${BASE}/sign-in`);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
+  await submitSignIn(page, email, PASSWORD);
   await page.waitForURL((u) => u.pathname !== "/sign-in");
   return page;
 }

@@ -9,7 +9,7 @@ import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, schema } from "@/db";
 import { generateClip } from "../fixtures/generate-clips";
-import { launchBrowser } from "../support/browser";
+import { launchBrowser, submitSignIn } from "../support/browser";
 import { uploadClip, waitForClip } from "../support/clips";
 import { BASE, call, signIn, type Auth } from "../support/http";
 import { makeWorld, PASSWORD, type World } from "../support/world";
@@ -184,10 +184,7 @@ describe("the coach comments at a frame; the golfer gets the e-mail", () => {
   it("writes at the impact frame and the golfer's e-mail names the moment", async () => {
     const coach = await browser.newContext({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true });
     const cp = await coach.newPage();
-    await cp.goto(`${BASE}/sign-in`);
-    await cp.getByLabel("E-mail").fill(w.coach.email);
-    await cp.getByLabel("Password").fill(PASSWORD);
-    await cp.getByRole("button", { name: "Sign in" }).click();
+    await submitSignIn(cp, w.coach.email, PASSWORD);
     await cp.waitForURL(`${BASE}/studio`);
     await cp.goto(`${BASE}/studio/coach/clips/${clipId}`);
     await cp.waitForFunction(() => (document.querySelector("video")?.readyState ?? 0) >= 2, undefined, { timeout: 20_000 });

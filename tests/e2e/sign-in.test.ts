@@ -1,7 +1,7 @@
 // Each role signs in through the real page in Chromium and lands on its own home.
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser } from "../support/browser";
+import { launchBrowser, submitSignIn } from "../support/browser";
 import { BASE } from "../support/http";
 import { makeWorld, PASSWORD, type World } from "../support/world";
 
@@ -17,10 +17,7 @@ afterAll(async () => {
 
 async function signInThroughForm(email: string, password: string) {
   const page = await browser.newPage();
-  await page.goto(`${BASE}/sign-in`);
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(password);
-  await page.getByRole("button", { name: "Sign in" }).click();
+  await submitSignIn(page, email, password);
   return page;
 }
 

@@ -5,7 +5,7 @@ import path from "node:path";
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import { generateClip } from "../fixtures/generate-clips";
-import { launchBrowser } from "../support/browser";
+import { launchBrowser, submitSignIn } from "../support/browser";
 import { BASE } from "../support/http";
 import { makeWorld, PASSWORD, type World } from "../support/world";
 
@@ -30,10 +30,7 @@ afterAll(async () => {
 
 it("drops two clips, sees progress and both ready", async () => {
   const page = await browser.newPage();
-  await page.goto(`${BASE}/sign-in`);
-  await page.getByLabel("E-mail").fill(w.fitter.email);
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
+  await submitSignIn(page, w.fitter.email, PASSWORD);
   await page.waitForURL(`${BASE}/studio`);
 
   await page.goto(`${BASE}/studio/fittings/${w.own.fitting.id}`);
