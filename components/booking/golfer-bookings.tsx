@@ -4,9 +4,10 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiFetch, ApiClientError } from "@/lib/client/api";
 import { localWhen, money, paymentWords, statusWords } from "./format";
+import { ReschedulePicker } from "./reschedule-picker";
 
 type GolferBooking = {
-  id: string; startsAt: string; status: string; feeMinor: number; currency: string; fittingTypeName: string; fitterName: string; timeZone: string;
+  id: string; startsAt: string; status: string; feeMinor: number; currency: string; fittingTypeId: string; fittingTypeName: string; fitterName: string; timeZone: string;
   payment: { state: string } | null;
 };
 
@@ -42,9 +43,13 @@ export function GolferBookings({ studioSlug }: { studioSlug?: string }) {
                 {b.fittingTypeName} with {b.fitterName} · <span className="num">{money(b.feeMinor, b.currency)}</span> ·{" "}
                 <span data-payment={b.payment?.state ?? "unpaid"}>{b.payment && b.payment.state !== "pending" ? paymentWords[b.payment.state] : "not paid yet"}</span>
               </p>
-              <div className="flex gap-2">
+              <div className="flex flex-wrap gap-2">
                 {!paid && b.feeMinor > 0 && <button type="button" className="btn-primary" disabled={act.isPending} onClick={() => act.mutate({ id: b.id, action: "pay" })}>Pay</button>}
                 <button type="button" className="btn-quiet" disabled={act.isPending} onClick={() => act.mutate({ id: b.id, action: "cancel" })}>Cancel visit</button>
+                {studioSlug && (
+                  <ReschedulePicker bookingId={b.id} studioSlug={studioSlug} fittingTypeId={b.fittingTypeId} timeZone={b.timeZone}
+                    onMoved={() => void queryClient.invalidateQueries({ queryKey: ["my-bookings"] })} />
+                )}
               </div>
             </li>
           );

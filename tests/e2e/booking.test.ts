@@ -3,7 +3,9 @@
 // golfer then sees the confirmed, paid visit (on /book/{slug}/bookings, which shows the
 // GolferBookings component, and as a booked fitting on its home /me).
 import type { Browser, Page } from "playwright-core";
+import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { db, schema } from "@/db";
 import { freeSlots, PAYMENTS_URL, withBooking, type BookingWorld } from "../integration/booking/booking-world";
 import { launchBrowser, submitSignIn } from "../support/browser";
 import { BASE } from "../support/http";
@@ -26,7 +28,8 @@ async function signInThroughForm(page: Page, email: string) {
 
 describe("booking and paying a fitting", () => {
   it("a golfer books and pays, the fitter confirms, the golfer sees the visit", async () => {
-    const slot = (await freeSlots(w.studioA.slug, w.types.A.id))[0]!;
+    // Three days ahead, so that the golfer may still move it under the 48-hour notice rule.
+    const slot = (await freeSlots(w.studioA.slug, w.types.A.id)).find((s) => Date.parse(s.start) > Date.now() + 3 * 86_400_000)!;
     const email = `booker.${w.tag}@test.fitframe`;
     const golfer = await (await browser.newContext()).newPage();
     await golfer.goto(`${BASE}/book/${w.studioA.slug}`);
@@ -64,5 +67,19 @@ describe("booking and paying a fitting", () => {
     const fittings = golfer.getByRole("region", { name: "Your fittings" });
     expect(await fittings.locator("li").count()).toBe(1);
     expect(await fittings.locator("li").textContent()).toContain("booked");
+
+    // Moving the visit from the golfer's home: another free time of the same fitting type.
+    const booked = golfer.locator("[data-booking]");
+    const shownBefore = await booked.locator(".num").first().textContent();
+    await booked.getByRole("button", { name: "Move visit" }).click();
+    const times = booked.getByLabel("New time");
+    await times.locator("option").nth(2).waitFor({ state: "attached" });
+    const target = (await times.locator("option").nth(2).getAttribute("value"))!;
+    await times.selectOption(target);
+    await booked.getByRole("button", { name: "Move to this time" }).click();
+    await booked.getByRole("button", { name: "Move visit" }).waitFor();
+    await expect.poll(() => booked.locator(".num").first().textContent()).not.toBe(shownBefore);
+    const [moved] = await db.select().from(schema.bookings).where(eq(schema.bookings.startsAt, new Date(target.split("|")[0]!)));
+    expect(moved).toBeDefined();
   });
 });
