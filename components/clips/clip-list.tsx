@@ -4,7 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { apiFetch } from "@/lib/client/api";
 
-type ClipSummary = { id: string; buildId: string; view: string; state: "awaiting_upload" | "queued" | "processing" | "ready" | "failed"; progress: number; failureReason: string | null; originalName: string; frameCount: number | null; captureFps: number };
+type ClipSummary = { id: string; buildId: string; strokeId: string | null; view: string; state: "awaiting_upload" | "queued" | "processing" | "ready" | "failed"; progress: number; failureReason: string | null; originalName: string; frameCount: number | null; captureFps: number };
 
 const stateWords: Record<ClipSummary["state"], string> = { awaiting_upload: "awaiting upload", queued: "queued", processing: "processing", ready: "ready", failed: "failed" };
 const settled = (c: ClipSummary) => c.state === "ready" || c.state === "failed";
@@ -41,6 +41,7 @@ export function ClipList({ fittingId }: { fittingId: string }) {
           {clip.state === "processing" && <progress className="h-1 w-full" max={100} value={clip.progress} aria-label="Processing" />}
           {clip.state === "failed" && <p className="field-error">{clip.failureReason}</p>}
           {clip.state === "ready" && <Link className="btn-quiet" href={`/studio/clips/${clip.id}`}>Review and mark</Link>}
+          {clip.strokeId && <Link className="text-label underline" href={`/studio/strokes/${clip.strokeId}`}>All views of this stroke</Link>}
         </li>
       ))}
     </ul>

@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { useDropzone } from "react-dropzone";
+import { StrokePicker, useStrokeChoice } from "./stroke-picker";
 import { UploadRow } from "./upload-row";
 import { useClipUploads } from "./use-clip-uploads";
 
@@ -22,12 +23,17 @@ export function ClipUploader({ fittingId, builds, consentConfirmed, cameraFps }:
   const [fps, setFps] = useState<Record<View, number>>(cameraFps);
   const [consent, setConsent] = useState(consentConfirmed);
   const uploads = useClipUploads(fittingId);
+  const stroke = useStrokeChoice(buildId);
   const ready = Boolean(buildId) && consent && fps[view] > 0;
   const { getRootProps, getInputProps, isDragActive } = useDropzone({
     accept: { "video/*": [".mp4", ".mov", ".m4v", ".avi", ".mkv"] },
     multiple: true,
     disabled: !ready,
-    onDropAccepted: (files) => uploads.add(files, { fittingId, buildId, view, captureFps: fps[view], consentConfirmed: consent }),
+    onDropAccepted: async (files) => {
+      const strokeId = await stroke.resolve(files.length);
+      if (strokeId === undefined) return;
+      uploads.add(files, { fittingId, buildId, view, captureFps: fps[view], consentConfirmed: consent, strokeId: strokeId ?? undefined });
+    },
   });
 
   if (builds.length === 0) return <p className="text-slate-600">Add a build first: every clip belongs to one.</p>;
@@ -52,6 +58,7 @@ export function ClipUploader({ fittingId, builds, consentConfirmed, cameraFps }:
         </label>
       </div>
       <p className="text-label text-slate-600">The camera&apos;s rate, not the file&apos;s: slow-motion files play slower than they were filmed.</p>
+      <StrokePicker choice={stroke} />
       {!consentConfirmed && (
         <label className="flex items-start gap-2">
           <input type="checkbox" className="mt-1" checked={consent} onChange={(e) => setConsent(e.target.checked)} />

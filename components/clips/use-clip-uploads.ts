@@ -5,7 +5,7 @@ import { useCallback, useRef, useState } from "react";
 import { apiFetch } from "@/lib/client/api";
 import { putWithProgress } from "@/lib/client/put-with-progress";
 
-export type UploadTarget = { fittingId: string; buildId: string; view: string; captureFps: number; consentConfirmed: boolean };
+export type UploadTarget = { fittingId: string; buildId: string; view: string; captureFps: number; consentConfirmed: boolean; strokeId?: string };
 export type UploadItem = {
   key: string;
   file: File;

@@ -7,11 +7,11 @@ import { call, type Auth } from "./http";
 
 const run = promisify(execFile);
 
-export async function uploadClip(auth: Auth, file: string, target: { fittingId: string; buildId: string; view?: string; captureFps?: number }) {
+export async function uploadClip(auth: Auth, file: string, target: { fittingId: string; buildId: string; view?: string; captureFps?: number; strokeId?: string }) {
   const { size } = await stat(file);
   const created = await call(auth, "POST", "/api/clips", {
     fittingId: target.fittingId, buildId: target.buildId, view: target.view ?? "overhead", fileName: path.basename(file),
-    contentType: "video/mp4", sizeBytes: size, captureFps: target.captureFps, consentConfirmed: true,
+    contentType: "video/mp4", sizeBytes: size, captureFps: target.captureFps, strokeId: target.strokeId, consentConfirmed: true,
   });
   if (created.status !== 201) throw new Error(`create clip: ${created.status} ${JSON.stringify(created.body)}`);
   const { clip, upload } = created.body as { clip: { id: string }; upload: { url: string; headers: Record<string, string> } };

@@ -10,6 +10,7 @@ import { enqueueClipProcessing } from "../queue";
 import { clipKeys, deleteKeys, objectSize, presignUpload } from "../storage";
 import { loadClip } from "./clip-access";
 import { fittingForWrite, getFitting } from "./fittings";
+import { assertStrokeOfBuild } from "./strokes";
 
 const { clips, builds, fittings } = schema;
 
@@ -18,6 +19,7 @@ export async function createClipUpload(actor: SignedInActor, input: z.infer<type
   const fitting = await fittingForWrite(actor, input.fittingId);
   const [build] = await db.select().from(builds).where(and(eq(builds.id, input.buildId), eq(builds.fittingId, fitting.id)));
   if (!build) throw new ApiError("not_found", "No such build in this fitting");
+  if (input.strokeId) await assertStrokeOfBuild(input.strokeId, build.id);
   const max = env().UPLOAD_MAX_BYTES;
   if (input.sizeBytes > max) throw new ApiError("payload_too_large", `The file is ${mib(input.sizeBytes)}; the limit is ${mib(max)}`);
   if (!fitting.consentConfirmedAt) {
@@ -37,7 +39,14 @@ export async function createClipUpload(actor: SignedInActor, input: z.infer<type
       originalName: input.fileName, contentType: input.contentType, sizeBytes: input.sizeBytes, objectKey: key, captureFps,
       slowMotionFactor: input.slowMotionFactor ?? Math.max(1, Math.round(captureFps / 30)), createdBy: actor.userId,
     })
-    .returning();
+    .returning()
+    .catch((err: unknown) => {
+      // One clip per view in a stroke (unique index clips_stroke_view_key).
+      if ((err as { cause?: { code?: string } }).cause?.code === "23505" || (err as { code?: string }).code === "23505") {
+        throw new ApiError("conflict", `This stroke already has ${input.view === "overhead" ? "an" : "a"} ${input.view} clip`);
+      }
+      throw err;
+    });
   const url = await presignUpload(key, input.contentType, input.sizeBytes);
   return { clip: clip!, upload: { method: "PUT" as const, url, headers: { "content-type": input.contentType } } };
 }
@@ -76,7 +85,7 @@ export async function listClipsOfFitting(actor: SignedInActor, fittingId: string
   await getFitting(actor, fittingId);
   return db
     .select({
-      id: clips.id, buildId: clips.buildId, view: clips.view, state: clips.state, progress: clips.progress,
+      id: clips.id, buildId: clips.buildId, strokeId: clips.strokeId, view: clips.view, state: clips.state, progress: clips.progress,
       failureReason: clips.failureReason, originalName: clips.originalName, frameCount: clips.frameCount,
       captureFps: clips.captureFps, createdAt: clips.createdAt,
     })

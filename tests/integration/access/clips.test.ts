@@ -1,11 +1,12 @@
 // Access matrix for the clip pipeline's routes: registering uploads, completing them, the
 // live list, and the frame and media links.
+import { db, schema } from "@/db";
 import { all, golferOf, readGolfer, runMatrix, writeGolfer, type MatrixCase, type Target } from "../../support/matrix";
 import type { World } from "../../support/world";
 import { insertClip } from "../../support/clip-rows";
 
 type Clip = Awaited<ReturnType<typeof insertClip>>;
-type W = World & { clips: Record<Target, Clip> };
+type W = World & { clips: Record<Target, Clip>; strokes: Record<Target, string> };
 
 const clipPath = (w: W, t: Target) => `/api/clips/${w.clips[t].id}`;
 const redirectTo = (okStatus: number) => ({
@@ -29,10 +30,19 @@ const cases: MatrixCase<W>[] = [
   { route: "GET /api/clips/{id}/frames/{n}", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/frames/3` }), expect: redirectTo(302) },
   { route: "GET /api/clips/{id}/media/poster", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/media/poster` }), expect: redirectTo(302) },
   { route: "GET /api/clips/{id}/media/proxy", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/media/proxy` }), expect: redirectTo(302) },
+  { route: "GET /api/builds/{id}/strokes", request: (w, t) => ({ method: "GET", path: `/api/builds/${golferOf(w, t).build.id}/strokes` }), expect: readGolfer },
+  { route: "POST /api/builds/{id}/strokes", request: (w, t) => ({ method: "POST", path: `/api/builds/${golferOf(w, t).build.id}/strokes` }), expect: writeGolfer(201) },
+  { route: "GET /api/strokes/{id}", request: (w, t) => ({ method: "GET", path: `/api/strokes/${w.strokes[t]}` }), expect: readGolfer },
 ];
 
 runMatrix("clip pipeline", cases, async (w) => {
   const clips = {} as Record<Target, Clip>;
-  for (const t of ["own", "sibling", "other"] as Target[]) clips[t] = await insertClip(golferOf(w, t));
-  return { ...w, clips };
+  const strokes = {} as Record<Target, string>;
+  for (const t of ["own", "sibling", "other"] as Target[]) {
+    const owner = golferOf(w, t);
+    clips[t] = await insertClip(owner);
+    const [stroke] = await db.insert(schema.strokes).values({ studioId: owner.fitting.studioId, buildId: owner.build.id, position: 1 }).returning();
+    strokes[t] = stroke!.id;
+  }
+  return { ...w, clips, strokes };
 });
