@@ -40,6 +40,10 @@ it("takes one clip per view and lines them up at their impact frames", async () 
     expect(Math.abs(clip.impactFrame - 100)).toBeLessThanOrEqual(1);
     expect(clip.impactConfirmed).toBe(false);
   }
+  const page = await call(fitter, "GET", `/studio/strokes/${strokeId}`);
+  expect(page.status).toBe(200);
+  expect(page.body).toContain('data-view="overhead"');
+  expect(page.body).toContain('data-view="face-on"');
   expect((await call(fitter, "GET", `/api/builds/${w.own.build.id}/strokes`)).body.strokes.map((s: { id: string }) => s.id)).toEqual([strokeId]);
 });
 
