@@ -5,8 +5,8 @@ import path from "node:path";
 import { beforeAll, expect, it } from "vitest";
 import { generateClip } from "../../fixtures/generate-clips";
 import { uploadClip, waitForClip } from "../../support/clips";
-import { call, type Auth } from "../../support/http";
-import { makeWorld, tokenFor, type World } from "../../support/world";
+import { call, signIn, type Auth } from "../../support/http";
+import { makeWorld, PASSWORD, tokenFor, type World } from "../../support/world";
 
 let w: World;
 let fitter: Auth;
@@ -40,7 +40,8 @@ it("takes one clip per view and lines them up at their impact frames", async () 
     expect(Math.abs(clip.impactFrame - 100)).toBeLessThanOrEqual(1);
     expect(clip.impactConfirmed).toBe(false);
   }
-  const page = await call(fitter, "GET", `/studio/strokes/${strokeId}`);
+  const session = { cookie: (await signIn(w.fitter.email, PASSWORD)).cookie! };
+  const page = await call(session, "GET", `/studio/strokes/${strokeId}`);
   expect(page.status).toBe(200);
   expect(page.body).toContain('data-view="overhead"');
   expect(page.body).toContain('data-view="face-on"');
