@@ -25,7 +25,7 @@ const strokes: Record<string, Omit<ClipOptions, keyof typeof base>[]> = {
   ],
 };
 
-function marksFromTruth(truth: ClipTruth): { frame: number; kind: "line" | "point" | "scale"; role: "target" | "face" | "clubhead" | "ball"; points: Point[]; lengthMm?: number }[] {
+export function marksFromTruth(truth: ClipTruth): { frame: number; kind: "line" | "point" | "scale"; role: "target" | "face" | "clubhead" | "ball"; points: Point[]; lengthMm?: number }[] {
   const k = truth.options.impactFrame;
   const address = 10;
   const at = (f: number) => truth.frames[f]!;
@@ -33,7 +33,7 @@ function marksFromTruth(truth: ClipTruth): { frame: number; kind: "line" | "poin
   const r = truth.ballRadiusPx;
   const centre = (f: number): Point => [(at(f).faceHeel[0] + at(f).faceToe[0]) / 2, (at(f).faceHeel[1] + at(f).faceToe[1]) / 2];
   return [
-    { frame: address, kind: "line", role: "target", points: [[bx, by], [bx, by - 140]] },
+    { frame: address, kind: "line", role: "target", points: [[bx, by], [bx, by - Math.min(140, by * 0.8)]] },
     { frame: address, kind: "scale", role: "ball", points: [[bx - r, by], [bx + r, by]], lengthMm: 42.67 },
     { frame: address, kind: "line", role: "face", points: [[...at(address).faceHeel], [...at(address).faceToe]] },
     { frame: k, kind: "line", role: "face", points: [[...at(k).faceHeel], [...at(k).faceToe]] },

@@ -1,12 +1,17 @@
 // The fitting workflow in Chromium: a fitter adds a golfer with intake (a failed submit keeps what
-// was typed), books a fitting, adds two builds, compares them, issues the spec, and the golfer signs
-// in and reads it. Clips: the upload screen is not part of this workflow yet, so ready clips and
-// their measurements are written straight into the database (as the marking screen would).
+// was typed), books a fitting, adds two builds, drops generated clips into each on the fitting
+// page, marks them (through the marks API with the page's session; drawing the same marks in the
+// review screen is tests/e2e/review.test.ts), compares, issues the spec, and the golfer reads it.
 import bcrypt from "bcryptjs";
-import { asc, eq } from "drizzle-orm";
+import { mkdtemp } from "node:fs/promises";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { and, asc, eq } from "drizzle-orm";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, schema } from "@/db";
+import { marksFromTruth } from "@/scripts/demo-clips";
+import { generateClip, type ClipTruth } from "../fixtures/generate-clips";
 import { launchBrowser, submitSignIn } from "../support/browser";
 import { BASE } from "../support/http";
 import { makeWorld, PASSWORD, type World } from "../support/world";
@@ -35,17 +40,28 @@ async function addBuild(page: Page, label: string, fields: Record<string, string
   await page.getByRole("status").filter({ hasText: `Added ${label}` }).waitFor();
 }
 
-async function addReadyClips(studioId: string, fittingId: string, buildId: string, faces: number[]) {
+const small = { width: 320, height: 180, fps: 240, frameCount: 160, impactFrame: 100, ballSpeedPxPerFrame: 2, pathDeg: 0.5 } as const;
+
+/** Drops one generated clip per face angle into a build, waits for them, then marks each from its truth. */
+async function uploadAndMark(page: Page, fittingId: string, buildLabel: string, faces: number[]) {
+  const dir = await mkdtemp(path.join(tmpdir(), "fitframe-e2e-fitting-"));
+  const truths = new Map<string, ClipTruth>();
   for (const [i, face] of faces.entries()) {
-    const [clip] = await db
-      .insert(schema.clips)
-      .values({ studioId, fittingId, buildId, view: "overhead", state: "ready", originalName: `p${i}.mp4`, contentType: "video/mp4", sizeBytes: 1, objectKey: `studios/${studioId}/clips/x${i}/source`, captureFps: 240, createdAt: new Date(Date.UTC(2026, 0, 1, 10, i)) })
-      .returning();
-    await db.insert(schema.measurements).values([
-      { studioId, clipId: clip!.id, key: "face_angle_impact", value: face, unit: "deg" },
-      { studioId, clipId: clip!.id, key: "start_direction", value: face * 0.8, unit: "deg" },
-      { studioId, clipId: clip!.id, key: "path", value: 0.5, unit: "deg" },
-    ]);
+    const name = `${buildLabel.replace(/\W+/g, "-")}-${i}.mp4`;
+    truths.set(name, await generateClip(path.join(dir, name), { ...small, faceAngleAddressDeg: face / 2, faceAngleImpactDeg: face, startDirectionDeg: face * 0.8 }));
+  }
+  const uploader = page.getByRole("region", { name: "Upload clips" });
+  await uploader.getByLabel("Build").selectOption({ label: buildLabel });
+  const consent = uploader.getByRole("checkbox", { name: /agreed to be filmed/ });
+  if (await consent.count()) await consent.check();
+  await uploader.getByLabel("Clip files").setInputFiles([...truths.keys()].map((name) => path.join(dir, name)));
+  for (const name of truths.keys()) await page.locator(`[data-clip-name="${name}"][data-clip-state="ready"]`).waitFor({ timeout: 90_000 });
+  const rows = await db.select().from(schema.clips).where(eq(schema.clips.fittingId, fittingId));
+  for (const [name, truth] of truths) {
+    const clip = rows.find((r) => r.originalName === name)!;
+    const send = (method: "post" | "put", url: string, data: unknown) => page.request[method](`${BASE}${url}`, { data, headers: { origin: BASE } });
+    expect((await send("put", `/api/clips/${clip.id}/moments`, { address: 10, impact: truth.options.impactFrame })).status()).toBe(200);
+    for (const mark of marksFromTruth(truth)) expect((await send("post", `/api/clips/${clip.id}/marks`, mark)).status()).toBe(201);
   }
 }
 
@@ -86,8 +102,13 @@ describe("fitting workflow", () => {
     const [fitting] = await db.select().from(schema.fittings).where(eq(schema.fittings.id, fittingId));
     const builds = await db.select().from(schema.builds).where(eq(schema.builds.fittingId, fittingId)).orderBy(asc(schema.builds.position));
     expect(builds.map((b) => b.label)).toEqual(["Own putter", "Mallet 34"]);
-    await addReadyClips(fitting!.studioId, fittingId, builds[0]!.id, [1.8, -1.2, 0.9, 2.1]);
-    await addReadyClips(fitting!.studioId, fittingId, builds[1]!.id, [0.2, -0.1, 0.3, -0.2, 0.1]);
+    expect(fitting!.golferId).toBeTruthy();
+    await uploadAndMark(page, fittingId, "Own putter", [1.8, -1.2, 0.9]);
+    await uploadAndMark(page, fittingId, "Mallet 34", [0.2, -0.1, 0.3]);
+    const stored = await db.select().from(schema.measurements).innerJoin(schema.clips, eq(schema.clips.id, schema.measurements.clipId))
+      .where(and(eq(schema.clips.fittingId, fittingId), eq(schema.measurements.key, "face_angle_impact")));
+    // The generator's truth (tests/fixtures/generate-clips.ts) comes back from the marks within 0.1°.
+    expect(stored.map((r) => r.measurements.value!).sort((a, b) => a - b).map((v) => Number(v.toFixed(1)))).toEqual([-1.2, -0.1, 0.2, 0.3, 0.9, 1.8]);
 
     await page.reload();
     const suggestion = page.getByRole("region", { name: /Suggested from the numbers/ });
