@@ -9,7 +9,7 @@ const boss = new PgBoss({
   connectionString: env().DATABASE_URL,
   schema: "pgboss",
   // How often expired jobs (a worker that died mid-job) are found and retried.
-  maintenanceIntervalSeconds: Number(process.env.PGBOSS_MAINTENANCE_S ?? 60),
+  maintenanceIntervalSeconds: env().PGBOSS_MAINTENANCE_S,
 });
 boss.on("error", (err) => console.error("pg-boss error:", err.message));
 

@@ -1,6 +1,7 @@
 // The queues this worker serves. Each job is a name, a zod payload and a handler that is
 // safe to run twice.
 import type PgBoss from "pg-boss";
+import { env } from "@/lib/config/env";
 import { CLIP_PROCESS_QUEUE, clipProcessPayload, clipProcessPolicy } from "@/lib/jobs/clip-process";
 import { runClipJob } from "./clip-job";
 import { sendAllDueReminders } from "@/lib/server/dal/bookings";
@@ -12,7 +13,7 @@ const REMINDER_QUEUE = "booking-reminders";
 export const running = new Set<AbortController>();
 
 export async function registerJobs(boss: PgBoss, concurrency: number): Promise<void> {
-  await boss.createQueue(CLIP_PROCESS_QUEUE, { name: CLIP_PROCESS_QUEUE, ...clipProcessPolicy });
+  await boss.createQueue(CLIP_PROCESS_QUEUE, { name: CLIP_PROCESS_QUEUE, ...clipProcessPolicy(env().CLIP_JOB_EXPIRE_S) });
   const handler: PgBoss.WorkWithMetadataHandler<unknown> = async ([job]) => {
     if (!job) return;
     const { clipId } = clipProcessPayload.parse(job.data);

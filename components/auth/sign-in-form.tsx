@@ -2,7 +2,7 @@
 
 import { signIn } from "next-auth/react";
 import { useRouter, useSearchParams } from "next/navigation";
-import { useState, type FormEvent } from "react";
+import { useFormSubmit } from "@/components/forms/use-form-submit";
 
 const messages: Record<string, string> = {
   CredentialsSignin: "That e-mail and password do not match an account.",
@@ -13,23 +13,16 @@ const messages: Record<string, string> = {
 export function SignInForm() {
   const router = useRouter();
   const params = useSearchParams();
-  const [error, setError] = useState<string | null>(params.get("error") ? messageFor(params.get("error")!) : null);
-  const [pending, setPending] = useState(false);
-
-  async function onSubmit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    setPending(true);
-    setError(null);
-    const form = new FormData(event.currentTarget);
-    const result = await signIn("credentials", { email: form.get("email"), password: form.get("password"), redirect: false });
-    setPending(false);
-    if (result?.ok && !result.error) {
+  const initial = params.get("error");
+  const { onSubmit, pending, error } = useFormSubmit(
+    async (form) => {
+      const result = await signIn("credentials", { email: form.get("email"), password: form.get("password"), redirect: false });
+      if (!result?.ok || result.error) throw new Error(messageFor(result?.error ?? (result?.status === 429 ? "RateLimited" : "CredentialsSignin")));
       router.replace("/");
       router.refresh();
-    } else {
-      setError(messageFor(result?.error ?? (result?.status === 429 ? "RateLimited" : "CredentialsSignin")));
-    }
-  }
+    },
+    { initialError: initial ? messageFor(initial) : null },
+  );
 
   return (
     <form onSubmit={onSubmit} className="flex flex-col gap-4" noValidate>

@@ -1,32 +1,20 @@
 "use client";
 // Step 3 for a visitor: sign in, or create a golfer account at this studio and sign in with it.
 import { signIn } from "next-auth/react";
-import { useState, type FormEvent } from "react";
-import { apiFetch, ApiClientError } from "@/lib/client/api";
+import { useState } from "react";
+import { useFormSubmit } from "@/components/forms/use-form-submit";
+import { apiFetch } from "@/lib/client/api";
 
 export function AccountStep({ slug, onSignedIn }: { slug: string; onSignedIn: (email: string) => void }) {
   const [mode, setMode] = useState<"new" | "existing">("new");
-  const [error, setError] = useState<string | null>(null);
-  const [pending, setPending] = useState(false);
-
-  async function onSubmit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    setPending(true);
-    setError(null);
-    const form = new FormData(event.currentTarget);
+  const { onSubmit, pending, error } = useFormSubmit(async (form) => {
     const email = String(form.get("email") ?? "");
     const password = String(form.get("password") ?? "");
-    try {
-      if (mode === "new") await apiFetch(`/api/booking/studios/${slug}/accounts`, { method: "POST", body: { name: form.get("name"), email, password } });
-      const result = await signIn("credentials", { email, password, redirect: false });
-      if (!result?.ok || result.error) throw new Error("That e-mail and password do not match an account.");
-      onSignedIn(email);
-    } catch (err) {
-      setError(err instanceof ApiClientError || err instanceof Error ? err.message : "Something went wrong");
-    } finally {
-      setPending(false);
-    }
-  }
+    if (mode === "new") await apiFetch(`/api/booking/studios/${slug}/accounts`, { method: "POST", body: { name: form.get("name"), email, password } });
+    const result = await signIn("credentials", { email, password, redirect: false });
+    if (!result?.ok || result.error) throw new Error("That e-mail and password do not match an account.");
+    onSignedIn(email);
+  });
 
   return (
     <section className="card" aria-labelledby="account-heading">

@@ -1,6 +1,7 @@
 "use client";
 // Last step: the intake basics, the request, then the fee on the provider's payment page.
-import { useState, type FormEvent } from "react";
+import { useState } from "react";
+import { useFormSubmit } from "@/components/forms/use-form-submit";
 import { apiFetch, ApiClientError } from "@/lib/client/api";
 import type { PublicStudio, SlotView } from "./booking-flow";
 import { money } from "./format";
@@ -9,16 +10,9 @@ type Props = { studio: PublicStudio; type: PublicStudio["fittingTypes"][number];
 
 export function RequestStep({ studio, type, slot, signedInAs, onTaken }: Props) {
   const [booking, setBooking] = useState<{ id: string } | null>(null);
-  const [error, setError] = useState<string | null>(null);
-  const [pending, setPending] = useState(false);
-
-  async function onSubmit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    setPending(true);
-    setError(null);
-    const form = new FormData(event.currentTarget);
-    const text = (name: string) => String(form.get(name) ?? "").trim() || undefined;
-    try {
+  const { onSubmit, pending, setPending, error, setError } = useFormSubmit(
+    async (form) => {
+      const text = (name: string) => String(form.get(name) ?? "").trim() || undefined;
       const made = await apiFetch<{ id: string }>(`/api/booking/studios/${studio.slug}/bookings`, {
         method: "POST",
         body: {
@@ -27,13 +21,10 @@ export function RequestStep({ studio, type, slot, signedInAs, onTaken }: Props) 
         },
       });
       setBooking(made);
-    } catch (err) {
-      setError(err instanceof ApiClientError ? err.message : "Something went wrong");
-      if (err instanceof ApiClientError && err.status === 409) onTaken();
-    } finally {
-      setPending(false);
-    }
-  }
+    },
+    // Someone else took the slot meanwhile: show the free times again.
+    { onError: (err) => err instanceof ApiClientError && err.status === 409 && onTaken() },
+  );
 
   async function pay() {
     setPending(true);

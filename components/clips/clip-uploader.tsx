@@ -2,19 +2,17 @@
 
 import { useState } from "react";
 import { useDropzone } from "react-dropzone";
+import { VIEWS, type View } from "@/lib/marks/types";
 import { StrokePicker, useStrokeChoice } from "./stroke-picker";
 import { UploadRow } from "./upload-row";
 import { useClipUploads } from "./use-clip-uploads";
 
-type View = "overhead" | "face-on" | "down-the-line";
 export type ClipUploaderProps = {
   fittingId: string;
   builds: { id: string; label: string }[];
   consentConfirmed: boolean;
   cameraFps: Record<View, number>;
 };
-
-const VIEWS: View[] = ["overhead", "face-on", "down-the-line"];
 
 /** Drop clips into a build and a view; each file goes straight to the store with its own progress. */
 export function ClipUploader({ fittingId, builds, consentConfirmed, cameraFps }: ClipUploaderProps) {

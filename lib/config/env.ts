@@ -20,6 +20,9 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default("Fitframe <no-reply@fitframe.local>"),
   UPLOAD_MAX_BYTES: z.coerce.number().int().positive().default(1024 * 1024 * 1024),
   WORKER_CONCURRENCY: z.coerce.number().int().min(1).max(16).default(1),
+  // After this long a clip job still running is given to another worker (its own died).
+  CLIP_JOB_EXPIRE_S: z.coerce.number().int().min(10).default(900),
+  PGBOSS_MAINTENANCE_S: z.coerce.number().int().min(1).default(60),
   // Comment e-mails: at most one per person per clip in this many seconds; the worker looks every poll.
   COMMENT_MAIL_WINDOW_S: z.coerce.number().int().min(1).default(600),
   COMMENT_MAIL_POLL_S: z.coerce.number().positive().default(2),

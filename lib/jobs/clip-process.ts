@@ -7,9 +7,6 @@ export const clipProcessPayload = z.object({ clipId: z.string().uuid() });
 export type ClipProcessPayload = z.infer<typeof clipProcessPayload>;
 
 /** Three tries in all, with growing delays; a job still active past its expiry is retried. */
-export const clipProcessPolicy = {
-  retryLimit: 2,
-  retryDelay: 2,
-  retryBackoff: true,
-  expireInSeconds: Number(process.env.CLIP_JOB_EXPIRE_S ?? 900),
-} as const;
+export function clipProcessPolicy(expireInSeconds: number) {
+  return { retryLimit: 2, retryDelay: 2, retryBackoff: true, expireInSeconds } as const;
+}

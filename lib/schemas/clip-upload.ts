@@ -1,6 +1,5 @@
 import { z } from "zod";
-
-export const VIEWS = ["overhead", "face-on", "down-the-line"] as const;
+import { VIEWS } from "@/lib/marks/types";
 
 /** What the browser or the capture computer says about a file before sending it. */
 export const clipCreateSchema = z.object({

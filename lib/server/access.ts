@@ -3,7 +3,7 @@ import { and, eq } from "drizzle-orm";
 import { db, schema } from "@/db";
 import { decideGolfer, decideStudio, type GolferPermission, type StudioPermission } from "@/lib/access/policy";
 import type { SignedInActor } from "./auth/actor";
-import { ApiError, forbidden, notFound } from "./http/errors";
+import { forbidden, notFound } from "./http/errors";
 
 export type { SignedInActor };
 
@@ -32,4 +32,3 @@ export async function assertGolfer(
   if (decision === "forbidden") throw forbidden();
 }
 
-export { ApiError };

@@ -11,7 +11,7 @@ function boss(): Promise<PgBoss> {
     const instance = new PgBoss({ connectionString: env().DATABASE_URL, schema: "pgboss", supervise: false, schedule: false, max: 2 });
     instance.on("error", (err) => console.error("pg-boss error:", err.message));
     await instance.start();
-    await instance.createQueue(CLIP_PROCESS_QUEUE, { name: CLIP_PROCESS_QUEUE, ...clipProcessPolicy });
+    await instance.createQueue(CLIP_PROCESS_QUEUE, { name: CLIP_PROCESS_QUEUE, ...clipProcessPolicy(env().CLIP_JOB_EXPIRE_S) });
     return instance;
   })();
   return globalForBoss.fitframeBoss;
@@ -19,5 +19,5 @@ function boss(): Promise<PgBoss> {
 
 /** One job per clip: the singleton key refuses a second while the first is waiting or running. */
 export async function enqueueClipProcessing(payload: ClipProcessPayload): Promise<string | null> {
-  return (await boss()).send(CLIP_PROCESS_QUEUE, payload, { ...clipProcessPolicy, singletonKey: payload.clipId });
+  return (await boss()).send(CLIP_PROCESS_QUEUE, payload, { ...clipProcessPolicy(env().CLIP_JOB_EXPIRE_S), singletonKey: payload.clipId });
 }

@@ -4,7 +4,7 @@ import { z } from "zod";
 import { db, schema } from "@/db";
 import { mayChangeMark } from "@/lib/access/policy";
 import { checkMarkAgainstClip, markInputSchema, type ClipFrameInfo, type ParsedMarkInput } from "@/lib/marks";
-import type { SignedInActor } from "../access";
+import { assertGolfer, type SignedInActor } from "../access";
 import { ApiError, forbidden, notFound } from "../http/errors";
 import { loadClip } from "./clip-access";
 import { lockClip, presentMeasurements, recomputeMeasurements, type LockedClip, type Tx } from "./measurements";
@@ -74,12 +74,17 @@ const markColumns = (m: ParsedMarkInput) => ({
   heightMm: "heightMm" in m ? m.heightMm : null,
 });
 
-/** Runs a change under the clip's lock and answers with the recomputed measurements. */
-async function changeMarks<T>(actor: SignedInActor, clipId: string, change: (tx: Tx, locked: LockedClip) => Promise<T>) {
+/**
+ * Runs a change under the clip's lock and answers with the recomputed measurements. The access
+ * check uses the locked row, so a save reads the clip once.
+ */
+async function changeMarks<T>(actor: SignedInActor, clipId: string, change: (tx: Tx, locked: LockedClip, info: ClipFrameInfo) => Promise<T>) {
   return db.transaction(async (tx) => {
     const locked = await lockClip(tx, clipId);
-    readyFrameInfo(locked.clip);
-    const result = await change(tx, locked);
+    const owner = { studioId: locked.clip.studioId, golferId: locked.golferId };
+    await assertGolfer(actor, "golfer.read", owner, "No such clip");
+    await assertGolfer(actor, "golfer.mark", owner, "No such clip");
+    const result = await change(tx, locked, readyFrameInfo(locked.clip));
     const measurements = presentMeasurements(await recomputeMeasurements(tx, locked, actor.userId), locked.settings.windows);
     return { ...result, measurements };
   });
@@ -94,9 +99,8 @@ export async function listMarks(actor: SignedInActor, clipId: string) {
 
 // POST /api/clips/{id}/marks
 export async function createMark(actor: SignedInActor, clipId: string, body: unknown) {
-  const loaded = await loadClip(actor, clipId, "golfer.mark");
-  const input = validMark(body, readyFrameInfo(loaded.clip));
-  return changeMarks(actor, clipId, async (tx, locked) => {
+  return changeMarks(actor, clipId, async (tx, locked, info) => {
+    const input = validMark(body, info);
     const [row] = await tx.insert(marks).values({ ...markColumns(input), studioId: locked.clip.studioId, clipId, authorUserId: actor.userId }).returning();
     return { mark: presentMark(row!) };
   });
@@ -117,11 +121,10 @@ async function markForChange(tx: Tx, actor: SignedInActor, clipId: string, markI
 
 // PATCH /api/clips/{id}/marks/{markId}: body { version, ...fields to change }
 export async function updateMark(actor: SignedInActor, clipId: string, markId: string, body: unknown) {
-  await loadClip(actor, clipId, "golfer.mark");
-  const { version, ...changes } = z.object({ version: versionSchema }).passthrough().parse(body);
-  return changeMarks(actor, clipId, async (tx, locked) => {
+  return changeMarks(actor, clipId, async (tx, _locked, info) => {
+    const { version, ...changes } = z.object({ version: versionSchema }).passthrough().parse(body);
     const current = await markForChange(tx, actor, clipId, markId, version);
-    const input = validMark({ ...markFields(current), ...changes }, readyFrameInfo(locked.clip));
+    const input = validMark({ ...markFields(current), ...changes }, info);
     const [row] = await tx
       .update(marks)
       .set({ ...markColumns(input), version: sql`${marks.version} + 1`, updatedAt: new Date() })
@@ -133,9 +136,8 @@ export async function updateMark(actor: SignedInActor, clipId: string, markId: s
 
 // DELETE /api/clips/{id}/marks/{markId}?version=N
 export async function deleteMark(actor: SignedInActor, clipId: string, markId: string, version: unknown) {
-  await loadClip(actor, clipId, "golfer.mark");
-  const checkedVersion = versionSchema.parse(version);
   return changeMarks(actor, clipId, async (tx) => {
+    const checkedVersion = versionSchema.parse(version);
     await markForChange(tx, actor, clipId, markId, checkedVersion);
     await tx.delete(marks).where(and(eq(marks.id, markId), eq(marks.version, checkedVersion)));
     return { deleted: markId };

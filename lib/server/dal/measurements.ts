@@ -21,7 +21,7 @@ type Executor = Db | Tx;
  */
 export async function lockClip(tx: Tx, clipId: string) {
   const [row] = await tx
-    .select({ clip: clips, handedness: golfers.handedness, staticLoftDeg: builds.loftDeg, settings: studios.settings })
+    .select({ clip: clips, golferId: golfers.id, handedness: golfers.handedness, staticLoftDeg: builds.loftDeg, settings: studios.settings })
     .from(clips)
     .innerJoin(fittings, eq(fittings.id, clips.fittingId))
     .innerJoin(golfers, eq(golfers.id, fittings.golferId))
