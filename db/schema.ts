@@ -182,6 +182,9 @@ export const clips = pgTable("clips", {
   topFrame: integer("top_frame"),
   impactFrame: integer("impact_frame"),
   finishFrame: integer("finish_frame"),
+  // Bumped by every write that changes what the measurements are computed from (marks, moments,
+  // clip settings), in the same statement as the change.
+  measureRevision: integer("measure_revision").notNull().default(0),
   createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
   ...timestamps,
 }, (t) => [
@@ -222,6 +225,8 @@ export const measurements = pgTable("measurements", {
   method: measurementMethodEnum("method").notNull().default("derived"),
   computedBy: uuid("computed_by").references(() => users.id, { onDelete: "set null" }),
   computedAt: timestamp("computed_at", { withTimezone: true }).notNull().defaultNow(),
+  // The clip's measure revision the value was computed from; an older computation never overwrites a newer one.
+  measureRevision: integer("measure_revision").notNull().default(0),
 }, (t) => [uniqueIndex("measurements_clip_key").on(t.clipId, t.key)]);
 
 export const comments = pgTable("comments", {

@@ -6,7 +6,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { asc, eq } from "drizzle-orm";
 import { db, schema } from "@/db";
-import { lockClip, recomputeMeasurements } from "@/lib/server/dal/measurements";
+import { refreshMeasurements } from "@/lib/server/dal/measurements";
 import { enqueueClipProcessing } from "@/lib/server/queue";
 import { clipKeys, putObject } from "@/lib/server/storage";
 import { generateClip, type ClipOptions, type ClipTruth } from "@/tests/fixtures/generate-clips";
@@ -60,7 +60,7 @@ export async function seedDemoClips(studioId: string, fittingId: string, fitterU
           addressFrame: 10, impactFrame: base.impactFrame, createdBy: fitterUserId,
         });
         await db.insert(schema.marks).values(marksFromTruth(truth).map((m) => ({ ...m, studioId, clipId: id, authorUserId: fitterUserId })));
-        await db.transaction(async (tx) => recomputeMeasurements(tx, await lockClip(tx, id), fitterUserId));
+        await refreshMeasurements(id, fitterUserId);
         await enqueueClipProcessing({ clipId: id });
       }
     }

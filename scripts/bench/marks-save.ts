@@ -12,6 +12,9 @@
  * connection moves marks no other connection holds, so no version conflicts) or post (new
  * marks). BENCH_CLIPS (default 1: every save contends for one clip's lock, the worst case),
  * BENCH_CONNECTIONS (50), BENCH_DURATION (10 s), BENCH_MARKS (marks drawn per clip first, 40).
+ *
+ * It then loads GET /api/me (sign-in by token and nothing else) the same way: the floor any
+ * signed-in API route stands on with this web server on this machine, for comparison.
  */
 import { createHash } from "node:crypto";
 import autocannon from "autocannon";
@@ -127,6 +130,8 @@ async function main() {
     console.log(`requests/s ${result.requests.average.toFixed(1)} (total ${result.requests.total})`);
     console.log(`errors ${errors} (connection ${result.errors}, timeouts ${result.timeouts}, non-2xx ${result.non2xx})`);
     if (errors > 0) process.exitCode = 1;
+    const floor = await autocannon({ url: `${base}/api/me`, connections, duration, headers });
+    console.log(`for comparison, GET /api/me alike: p50 ${floor.latency.p50} ms, p99 ${floor.latency.p99} ms, requests/s ${floor.requests.average.toFixed(1)}`);
   } finally {
     if (pool && made && process.env.BENCH_KEEP !== "1") await pool.query("delete from golfers where id = $1", [made.golferId]);
     await pool?.end();

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq, isNull } from "drizzle-orm";
+import { and, eq, isNull, sql } from "drizzle-orm";
 import { getServerSession } from "next-auth";
 import { headers } from "next/headers";
 import { db, schema } from "@/db";
@@ -9,32 +9,50 @@ import { hashToken } from "./tokens";
 
 export type SignedInActor = Actor & { name: string; email: string; via: "session" | "token" };
 
-async function loadActor(userId: string, via: SignedInActor["via"], sessionVersion?: number): Promise<SignedInActor | null> {
-  const [row] = await db
-    .select({ user: schema.users, golferId: schema.golfers.id })
-    .from(schema.users)
-    .leftJoin(schema.golfers, eq(schema.golfers.userId, schema.users.id))
-    .where(eq(schema.users.id, userId));
-  if (!row || row.user.disabled) return null;
+type UserRow = typeof schema.users.$inferSelect;
+
+const actorColumns = { user: schema.users, golferId: schema.golfers.id };
+
+function toActor(user: UserRow, golferId: string | null, via: SignedInActor["via"]): SignedInActor | null {
+  if (user.disabled) return null;
+  return { userId: user.id, role: user.role, studioId: user.studioId, golferId, name: user.name, email: user.email, via };
+}
+
+// Prepared once: every API request and page asks for its actor.
+const actorByUserId = db
+  .select(actorColumns)
+  .from(schema.users)
+  .leftJoin(schema.golfers, eq(schema.golfers.userId, schema.users.id))
+  .where(eq(schema.users.id, sql.placeholder("userId")))
+  .prepare("actor_by_user_id");
+
+async function actorFromSession(userId: string, sessionVersion: number | undefined): Promise<SignedInActor | null> {
+  const [row] = await actorByUserId.execute({ userId });
+  if (!row) return null;
   // A role change, a disable or a new password bumps the version: older sessions end at once.
   if (sessionVersion !== undefined && row.user.sessionVersion !== sessionVersion) return null;
-  const { user } = row;
-  return { userId: user.id, role: user.role, studioId: user.studioId, golferId: row.golferId, name: user.name, email: user.email, via };
+  return toActor(row.user, row.golferId, "session");
 }
+
+// Token, user and golfer in one query: scripts call the API in bursts and every request pays for it.
+const actorByTokenHash = db
+  .select({ ...actorColumns, tokenId: schema.apiTokens.id, lastUsedAt: schema.apiTokens.lastUsedAt })
+  .from(schema.apiTokens)
+  .innerJoin(schema.users, eq(schema.users.id, schema.apiTokens.userId))
+  .leftJoin(schema.golfers, eq(schema.golfers.userId, schema.users.id))
+  .where(and(eq(schema.apiTokens.tokenHash, sql.placeholder("tokenHash")), isNull(schema.apiTokens.revokedAt)))
+  .prepare("actor_by_token_hash");
 
 async function actorFromBearer(authorization: string): Promise<SignedInActor | null> {
   const value = authorization.slice("bearer ".length).trim();
   if (!value) return null;
-  const [token] = await db
-    .select({ id: schema.apiTokens.id, userId: schema.apiTokens.userId, lastUsedAt: schema.apiTokens.lastUsedAt })
-    .from(schema.apiTokens)
-    .where(and(eq(schema.apiTokens.tokenHash, hashToken(value)), isNull(schema.apiTokens.revokedAt)));
-  if (!token) return null;
+  const [row] = await actorByTokenHash.execute({ tokenHash: hashToken(value) });
+  if (!row) return null;
   // "Last used" to the minute is enough; writing it on every request would serialise a busy script on one row.
-  if (!token.lastUsedAt || Date.now() - token.lastUsedAt.getTime() > 60_000) {
-    db.update(schema.apiTokens).set({ lastUsedAt: new Date() }).where(eq(schema.apiTokens.id, token.id)).catch((err) => console.error("token last-used update failed", err));
+  if (!row.lastUsedAt || Date.now() - row.lastUsedAt.getTime() > 60_000) {
+    db.update(schema.apiTokens).set({ lastUsedAt: new Date() }).where(eq(schema.apiTokens.id, row.tokenId)).catch((err) => console.error("token last-used update failed", err));
   }
-  return loadActor(token.userId, "token");
+  return toActor(row.user, row.golferId, "token");
 }
 
 /** The signed-in person for this request (Bearer token or browser session), checked against the database. */
@@ -43,5 +61,5 @@ export async function currentActor(): Promise<SignedInActor | null> {
   if (authorization?.toLowerCase().startsWith("bearer ")) return actorFromBearer(authorization);
   const session = await getServerSession(authOptions);
   if (!session?.user?.id) return null;
-  return loadActor(session.user.id, "session", session.user.sessionVersion);
+  return actorFromSession(session.user.id, session.user.sessionVersion);
 }

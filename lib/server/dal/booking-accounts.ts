@@ -5,6 +5,7 @@ import { db, schema } from "@/db";
 import type { golferAccountSchema } from "@/lib/booking/schemas";
 import { hashPassword } from "../auth/password";
 import { ApiError } from "../http/errors";
+import { pgErrorCode } from "../pg-errors";
 import { studioBySlug } from "./booking-slots";
 
 const { users, golfers } = schema;
@@ -19,8 +20,7 @@ export async function createGolferAccount(slug: string, input: z.infer<typeof go
       return { userId: user!.id, golferId: golfer!.id, email: user!.email };
     });
   } catch (err) {
-    const code = (err as { code?: string; cause?: { code?: string } }).cause?.code ?? (err as { code?: string }).code;
-    if (code === "23505") throw new ApiError("conflict", "An account with this e-mail already exists. Sign in instead.");
+    if (pgErrorCode(err) === "23505") throw new ApiError("conflict", "An account with this e-mail already exists. Sign in instead.");
     throw err;
   }
 }

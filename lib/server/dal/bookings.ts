@@ -8,6 +8,7 @@ import type { bookingCreateSchema, bookingListQuery, rescheduleSchema } from "@/
 import { refundOnCancel, withinNotice } from "@/lib/booking/notice";
 import { assertGolfer, assertStudio, type SignedInActor } from "../access";
 import { ApiError, forbidden, notFound } from "../http/errors";
+import { pgErrorCode } from "../pg-errors";
 import { sendBookingMail } from "./booking-mail";
 import { refundIfPaid } from "./booking-payments";
 import { BOOKING_WEEKS, findFreeSlot, fittingTypeOf, studioBySlug } from "./booking-slots";
@@ -16,10 +17,7 @@ const { bookings, golfers, users, fittingTypes, payments, fittings, builds, book
 
 const isStaff = (actor: SignedInActor) => actor.role === "admin" || actor.role === "fitter";
 
-function isOverlap(err: unknown): boolean {
-  const codes = [err, (err as { cause?: unknown })?.cause].map((e) => (e as { code?: string } | undefined)?.code);
-  return codes.includes("23P01");
-}
+const isOverlap = (err: unknown) => pgErrorCode(err) === "23P01";
 const slotTaken = () => new ApiError("conflict", "That slot has just been taken. Please pick another.");
 
 /** The booking, once the actor may see it (its golfer, the studio's staff, a coach it is shared with). */

@@ -6,6 +6,7 @@ import { env } from "@/lib/config/env";
 import type { clipCreateSchema } from "@/lib/schemas/clip-upload";
 import type { SignedInActor } from "../access";
 import { ApiError } from "../http/errors";
+import { pgErrorCode } from "../pg-errors";
 import { enqueueClipProcessing } from "../queue";
 import { clipKeys, deleteKeys, objectSize, presignUpload } from "../storage";
 import { loadClip } from "./clip-access";
@@ -42,7 +43,7 @@ export async function createClipUpload(actor: SignedInActor, input: z.infer<type
     .returning()
     .catch((err: unknown) => {
       // One clip per view in a stroke (unique index clips_stroke_view_key).
-      if ((err as { cause?: { code?: string } }).cause?.code === "23505" || (err as { code?: string }).code === "23505") {
+      if (pgErrorCode(err) === "23505") {
         throw new ApiError("conflict", `This stroke already has ${input.view === "overhead" ? "an" : "a"} ${input.view} clip`);
       }
       throw err;

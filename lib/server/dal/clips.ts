@@ -1,11 +1,11 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { z } from "zod";
 import { db, schema } from "@/db";
 import type { SignedInActor } from "../access";
-import { ApiError } from "../http/errors";
+import { ApiError, notFound } from "../http/errors";
 import { loadClip, type LoadedClip } from "./clip-access";
-import { lockClip, presentMeasurements, recomputeMeasurements } from "./measurements";
+import { refreshMeasurements } from "./measurements";
 
 const { clips } = schema;
 
@@ -43,15 +43,22 @@ export async function getClip(actor: SignedInActor, clipId: string) {
   return presentClip(await loadClip(actor, clipId));
 }
 
-/** Writes clip columns under the clip's lock and recomputes its measurements in the same transaction. */
+/**
+ * Writes clip columns under the clip's lock (a change may depend on the current row) and bumps its
+ * measure revision; once committed, the measurements are recomputed from the new row.
+ */
 async function changeClip(actor: SignedInActor, loaded: LoadedClip, change: (clip: LoadedClip["clip"]) => Partial<typeof clips.$inferInsert>) {
-  return db.transaction(async (tx) => {
-    const locked = await lockClip(tx, loaded.clip.id);
-    const [clip] = await tx.update(clips).set({ ...change(locked.clip), updatedAt: new Date() }).where(eq(clips.id, loaded.clip.id)).returning();
-    const updated = { ...locked, clip: clip! };
-    const measurements = presentMeasurements(await recomputeMeasurements(tx, updated, actor.userId), locked.settings.windows);
-    return { clip: presentClip({ ...loaded, clip: clip! }), measurements };
+  const clip = await db.transaction(async (tx) => {
+    const [current] = await tx.select().from(clips).where(eq(clips.id, loaded.clip.id)).for("update");
+    if (!current) throw notFound("No such clip");
+    const [updated] = await tx
+      .update(clips)
+      .set({ ...change(current), measureRevision: sql`${clips.measureRevision} + 1`, updatedAt: new Date() })
+      .where(eq(clips.id, current.id))
+      .returning();
+    return updated!;
   });
+  return { clip: presentClip({ ...loaded, clip }), measurements: await refreshMeasurements(clip.id, actor.userId) };
 }
 
 // PATCH /api/clips/{id}: capture fps, mirroring, playback slow-motion factor (staff only)

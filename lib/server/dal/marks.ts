@@ -1,17 +1,24 @@
 import "server-only";
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq, exists, inArray, sql } from "drizzle-orm";
 import { z } from "zod";
 import { db, schema } from "@/db";
 import { mayChangeMark } from "@/lib/access/policy";
 import { checkMarkAgainstClip, markInputSchema, type ClipFrameInfo, type ParsedMarkInput } from "@/lib/marks";
 import { assertGolfer, type SignedInActor } from "../access";
 import { ApiError, forbidden, notFound } from "../http/errors";
+import { pgErrorCode } from "../pg-errors";
 import { loadClip } from "./clip-access";
-import { lockClip, presentMeasurements, recomputeMeasurements, type LockedClip, type Tx } from "./measurements";
+import { refreshMeasurements } from "./measurements";
 
-const { marks } = schema;
+const { marks, clips, fittings } = schema;
 type MarkRow = typeof marks.$inferSelect;
-type Clip = LockedClip["clip"];
+
+// What a mark save needs to know about its clip: no more, as every save reads it.
+const clipColumns = {
+  id: clips.id, studioId: clips.studioId, view: clips.view, state: clips.state, failureReason: clips.failureReason,
+  width: clips.width, height: clips.height, frameCount: clips.frameCount,
+};
+type Clip = { [K in keyof typeof clipColumns]: (typeof clips.$inferSelect)[K] };
 
 const STATE_WORDS: Record<Clip["state"], string> = {
   awaiting_upload: "still awaiting its upload",
@@ -22,7 +29,7 @@ const STATE_WORDS: Record<Clip["state"], string> = {
 };
 
 /** The frame facts marks are checked against; 422 unless the clip is ready. */
-export function readyFrameInfo(clip: Clip): ClipFrameInfo {
+function readyFrameInfo(clip: Clip): ClipFrameInfo {
   if (clip.state !== "ready" || clip.width == null || clip.height == null || clip.frameCount == null) {
     const reason = clip.state === "failed" && clip.failureReason ? ` (${clip.failureReason})` : "";
     throw new ApiError("unprocessable", `Marks can be drawn only on a ready clip; this clip is ${STATE_WORDS[clip.state]}${reason}.`);
@@ -67,27 +74,88 @@ function presentMark(m: MarkRow) {
   return { id: m.id, clipId: m.clipId, ...markFields(m), authorUserId: m.authorUserId, version: m.version, createdAt: m.createdAt, updatedAt: m.updatedAt };
 }
 
-const markColumns = (m: ParsedMarkInput) => ({
-  frame: m.frame, kind: m.kind, role: m.role, points: m.points as [number, number][],
+
+// The statements every save runs are prepared once per process: building a query with joins
+// costs more than running it (docs/benchmarks.md, marks-save).
+const placeholder = sql.placeholder;
+
+const clipForMarkingQuery = (withMark: boolean) =>
+  db
+    .select({ clip: clipColumns, golferId: fittings.golferId, mark: marks })
+    .from(clips)
+    .innerJoin(fittings, eq(fittings.id, clips.fittingId))
+    .leftJoin(marks, withMark ? and(eq(marks.id, placeholder("markId")), eq(marks.clipId, clips.id)) : sql`false`)
+    .where(eq(clips.id, placeholder("clipId")))
+    .prepare(withMark ? "clip_and_mark_for_marking" : "clip_for_marking");
+const clipWithMark = clipForMarkingQuery(true);
+const clipWithoutMark = clipForMarkingQuery(false);
+
+/**
+ * The clip (and, for a change, the mark) a save acts on, after the access rules: one query.
+ * Saves take no lock: each is one statement, and the measurements follow (measurements.ts).
+ */
+async function clipForMarking(actor: SignedInActor, clipId: string, markId?: string) {
+  const [row] = await (markId ? clipWithMark.execute({ clipId, markId }) : clipWithoutMark.execute({ clipId }));
+  if (!row) throw notFound("No such clip");
+  const owner = { studioId: row.clip.studioId, golferId: row.golferId };
+  await assertGolfer(actor, "golfer.read", owner, "No such clip");
+  await assertGolfer(actor, "golfer.mark", owner, "No such clip");
+  return { clip: row.clip, info: readyFrameInfo(row.clip), mark: row.mark };
+}
+
+/**
+ * A CTE that bumps the clip's measure revision in the statement that changes its marks (so a
+ * reader sees marks and revision together). It takes the clip's row lock before the mark's: the
+ * order cascading deletes take them in, so a save racing a clip's deletion cannot deadlock.
+ * For a change, a stale version (the save will change nothing) does not bump.
+ */
+function bumpClip(guardMark: boolean) {
+  const markStillThere = guardMark
+    ? sql` and ${exists(db.select({ one: sql`1` }).from(marks).where(and(eq(marks.id, placeholder("markId")), eq(marks.version, placeholder("version")))))}`
+    : sql``;
+  return db.$with("bumped", { id: clips.id }).as(
+    sql`update ${clips} set measure_revision = measure_revision + 1 where ${clips.id} = ${placeholder("clipId")}${markStillThere} returning ${clips.id}`,
+  );
+}
+
+const bumpedClipIds = (bumped: ReturnType<typeof bumpClip>) => db.select({ id: bumped.id }).from(bumped);
+const thisMarkAtVersion = (bumped: ReturnType<typeof bumpClip>) =>
+  and(eq(marks.id, placeholder("markId")), eq(marks.version, placeholder("version")), inArray(marks.clipId, bumpedClipIds(bumped)));
+
+// A mark's drawn fields as statement parameters; `drawnValues` fills them (points go as JSON text).
+const drawnColumns = {
+  frame: sql`${placeholder("frame")}`, kind: sql`${placeholder("kind")}`, role: sql`${placeholder("role")}`, points: sql`${placeholder("points")}`,
+  lengthMm: sql`${placeholder("lengthMm")}`, widthMm: sql`${placeholder("widthMm")}`, heightMm: sql`${placeholder("heightMm")}`,
+};
+const drawnValues = (m: ParsedMarkInput) => ({
+  frame: m.frame, kind: m.kind, role: m.role, points: JSON.stringify(m.points),
   lengthMm: "lengthMm" in m ? m.lengthMm : null,
   widthMm: "widthMm" in m ? m.widthMm : null,
   heightMm: "heightMm" in m ? m.heightMm : null,
 });
 
-/**
- * Runs a change under the clip's lock and answers with the recomputed measurements. The access
- * check uses the locked row, so a save reads the clip once.
- */
-async function changeMarks<T>(actor: SignedInActor, clipId: string, change: (tx: Tx, locked: LockedClip, info: ClipFrameInfo) => Promise<T>) {
-  return db.transaction(async (tx) => {
-    const locked = await lockClip(tx, clipId);
-    const owner = { studioId: locked.clip.studioId, golferId: locked.golferId };
-    await assertGolfer(actor, "golfer.read", owner, "No such clip");
-    await assertGolfer(actor, "golfer.mark", owner, "No such clip");
-    const result = await change(tx, locked, readyFrameInfo(locked.clip));
-    const measurements = presentMeasurements(await recomputeMeasurements(tx, locked, actor.userId), locked.settings.windows);
-    return { ...result, measurements };
-  });
+const insertMark = db
+  .with(bumpClip(false))
+  .insert(marks)
+  .values({ ...drawnColumns, studioId: placeholder("studioId"), clipId: placeholder("clipId"), authorUserId: placeholder("authorUserId") })
+  .returning()
+  .prepare("mark_insert");
+
+const updateBumped = bumpClip(true);
+const updateMarkAtVersion = db
+  .with(updateBumped)
+  .update(marks)
+  .set({ ...drawnColumns, version: sql`${marks.version} + 1`, updatedAt: sql`now()` })
+  .where(thisMarkAtVersion(updateBumped))
+  .returning()
+  .prepare("mark_update");
+
+const deleteBumped = bumpClip(true);
+const deleteMarkAtVersion = db.with(deleteBumped).delete(marks).where(thisMarkAtVersion(deleteBumped)).returning({ id: marks.id }).prepare("mark_delete");
+
+/** After a committed change: the clip's measurements, recomputed and stored. */
+async function withMeasurements<T extends object>(actor: SignedInActor, clipId: string, result: T) {
+  return { ...result, measurements: await refreshMeasurements(clipId, actor.userId) };
 }
 
 // GET /api/clips/{id}/marks
@@ -99,47 +167,54 @@ export async function listMarks(actor: SignedInActor, clipId: string) {
 
 // POST /api/clips/{id}/marks
 export async function createMark(actor: SignedInActor, clipId: string, body: unknown) {
-  return changeMarks(actor, clipId, async (tx, locked, info) => {
-    const input = validMark(body, info);
-    const [row] = await tx.insert(marks).values({ ...markColumns(input), studioId: locked.clip.studioId, clipId, authorUserId: actor.userId }).returning();
-    return { mark: presentMark(row!) };
-  });
+  const { clip, info } = await clipForMarking(actor, clipId);
+  const input = validMark(body, info);
+  const [row] = await insertMark
+    .execute({ ...drawnValues(input), studioId: clip.studioId, clipId, authorUserId: actor.userId })
+    .catch((err: unknown) => {
+      // The clip went away between the check and the insert.
+      if (pgErrorCode(err) === "23503") throw notFound("No such clip");
+      throw err;
+    });
+  return withMeasurements(actor, clipId, { mark: presentMark(row!) });
 }
 
 const versionSchema = z.number({ error: "version (the mark's current version) is required" }).int().positive();
 
-/** The mark under the clip's lock, after the author rule and the version check. */
-async function markForChange(tx: Tx, actor: SignedInActor, clipId: string, markId: string, version: number): Promise<MarkRow> {
-  const [current] = await tx.select().from(marks).where(and(eq(marks.id, markId), eq(marks.clipId, clipId)));
+const staleVersion = (current: number, sent: number) =>
+  new ApiError("conflict", `The mark was changed by someone else (version ${current}, you sent ${sent}); reload it and try again.`);
+
+/** The mark as read with its clip, after the author rule and the version check. */
+function markForChange(actor: SignedInActor, current: MarkRow | null, version: number): MarkRow {
   if (!current) throw notFound("No such mark on this clip");
   if (!mayChangeMark(actor, current.authorUserId)) throw forbidden("A coach may change or remove only the marks it drew");
-  if (current.version !== version) {
-    throw new ApiError("conflict", `The mark was changed by someone else (version ${current.version}, you sent ${version}); reload it and try again.`);
-  }
+  if (current.version !== version) throw staleVersion(current.version, version);
   return current;
+}
+
+/** A write guarded by the version read a moment earlier found nothing: someone got there first. */
+async function lostRace(markId: string, version: number): Promise<never> {
+  const [now] = await db.select({ version: marks.version }).from(marks).where(eq(marks.id, markId));
+  throw now ? staleVersion(now.version, version) : notFound("No such mark on this clip");
 }
 
 // PATCH /api/clips/{id}/marks/{markId}: body { version, ...fields to change }
 export async function updateMark(actor: SignedInActor, clipId: string, markId: string, body: unknown) {
-  return changeMarks(actor, clipId, async (tx, _locked, info) => {
-    const { version, ...changes } = z.object({ version: versionSchema }).passthrough().parse(body);
-    const current = await markForChange(tx, actor, clipId, markId, version);
-    const input = validMark({ ...markFields(current), ...changes }, info);
-    const [row] = await tx
-      .update(marks)
-      .set({ ...markColumns(input), version: sql`${marks.version} + 1`, updatedAt: new Date() })
-      .where(and(eq(marks.id, markId), eq(marks.version, version)))
-      .returning();
-    return { mark: presentMark(row!) };
-  });
+  const { version, ...changes } = z.object({ version: versionSchema }).passthrough().parse(body);
+  const { info, mark } = await clipForMarking(actor, clipId, markId);
+  const current = markForChange(actor, mark, version);
+  const input = validMark({ ...markFields(current), ...changes }, info);
+  const [row] = await updateMarkAtVersion.execute({ ...drawnValues(input), clipId, markId, version });
+  if (!row) return lostRace(markId, version);
+  return withMeasurements(actor, clipId, { mark: presentMark(row) });
 }
 
 // DELETE /api/clips/{id}/marks/{markId}?version=N
 export async function deleteMark(actor: SignedInActor, clipId: string, markId: string, version: unknown) {
-  return changeMarks(actor, clipId, async (tx) => {
-    const checkedVersion = versionSchema.parse(version);
-    await markForChange(tx, actor, clipId, markId, checkedVersion);
-    await tx.delete(marks).where(and(eq(marks.id, markId), eq(marks.version, checkedVersion)));
-    return { deleted: markId };
-  });
+  const checkedVersion = versionSchema.parse(version);
+  const { mark } = await clipForMarking(actor, clipId, markId);
+  markForChange(actor, mark, checkedVersion);
+  const [gone] = await deleteMarkAtVersion.execute({ clipId, markId, version: checkedVersion });
+  if (!gone) return lostRace(markId, checkedVersion);
+  return withMeasurements(actor, clipId, { deleted: markId });
 }

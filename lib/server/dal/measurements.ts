@@ -1,42 +1,29 @@
 import "server-only";
-import { and, asc, eq, sql } from "drizzle-orm";
-import { db, schema, type Db } from "@/db";
+import { and, eq, sql } from "drizzle-orm";
+import { db, schema } from "@/db";
 import type { StoredMark } from "@/lib/marks/types";
 import { computeMeasurements } from "@/lib/metrics/compute";
 import { METRICS_BY_VIEW } from "@/lib/metrics/keys";
 import type { ClipContext, Measurement } from "@/lib/metrics/types";
 import type { SignedInActor } from "../access";
 import { notFound } from "../http/errors";
-import { loadClip } from "./clip-access";
+import { loadClip, type LoadedClip } from "./clip-access";
 
 const { clips, fittings, golfers, builds, studios, marks, measurements } = schema;
 
-export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
-type Executor = Db | Tx;
+// The clip columns the computation reads (not the motion signal: hundreds of numbers it never uses).
+const measuredClipColumns = {
+  id: clips.id, studioId: clips.studioId, view: clips.view, width: clips.width, height: clips.height, frameCount: clips.frameCount,
+  captureFps: clips.captureFps, mirrored: clips.mirrored, addressFrame: clips.addressFrame, takeawayFrame: clips.takeawayFrame,
+  topFrame: clips.topFrame, impactFrame: clips.impactFrame, finishFrame: clips.finishFrame, measureRevision: clips.measureRevision,
+};
+type MeasuredClip = Pick<LoadedClip["clip"], keyof typeof measuredClipColumns>;
 
-/**
- * Locks the clip row for the rest of the transaction and returns it with what the
- * measurements need. Every write that changes a clip's measurements starts here, so
- * recomputations of one clip run one after another and the stored values match the marks.
- */
-export async function lockClip(tx: Tx, clipId: string) {
-  const [row] = await tx
-    .select({ clip: clips, golferId: golfers.id, handedness: golfers.handedness, staticLoftDeg: builds.loftDeg, settings: studios.settings })
-    .from(clips)
-    .innerJoin(fittings, eq(fittings.id, clips.fittingId))
-    .innerJoin(golfers, eq(golfers.id, fittings.golferId))
-    .innerJoin(builds, eq(builds.id, clips.buildId))
-    .innerJoin(studios, eq(studios.id, clips.studioId))
-    .where(eq(clips.id, clipId))
-    .for("update", { of: clips });
-  if (!row) throw notFound("No such clip");
-  return row;
-}
-
-export type LockedClip = Awaited<ReturnType<typeof lockClip>>;
+/** What the computation needs about a clip: the clip, its golfer's handedness, its build's loft, the studio's settings. */
+export type MeasureSubject = Pick<LoadedClip, "handedness" | "staticLoftDeg" | "settings"> & { clip: MeasuredClip };
 
 /** The clip as the computation sees it; null until processing has measured the frames. */
-export function clipContext(row: Pick<LockedClip, "clip" | "handedness" | "staticLoftDeg" | "settings">): ClipContext | null {
+export function clipContext(row: MeasureSubject): ClipContext | null {
   const { clip } = row;
   if (clip.width == null || clip.height == null || clip.frameCount == null) return null;
   return {
@@ -53,50 +40,95 @@ export function clipContext(row: Pick<LockedClip, "clip" | "handedness" | "stati
   };
 }
 
-/** Marks in drawing order: when two compete for one slot the computation takes the latest drawn. */
-export async function clipMarks(ex: Executor, clipId: string): Promise<StoredMark[]> {
-  const rows = await ex
-    .select({ id: marks.id, frame: marks.frame, kind: marks.kind, role: marks.role, points: marks.points, lengthMm: marks.lengthMm, widthMm: marks.widthMm, heightMm: marks.heightMm })
-    .from(marks)
-    .where(eq(marks.clipId, clipId))
-    .orderBy(asc(marks.createdAt), asc(marks.id));
-  return rows.map((m) => ({
-    id: m.id, frame: m.frame, kind: m.kind, role: m.role, points: m.points,
-    ...(m.lengthMm != null && { lengthMm: m.lengthMm }),
-    ...(m.widthMm != null && { widthMm: m.widthMm }),
-    ...(m.heightMm != null && { heightMm: m.heightMm }),
-  }));
+// Marks in drawing order (when two compete for one slot the computation takes the latest drawn),
+// as one JSON value: one row to parse instead of one per mark. Null sizes are left out.
+const marksJson = sql<StoredMark[]>`coalesce((
+  select json_agg(json_strip_nulls(json_build_object(
+    'id', m.id, 'frame', m.frame, 'kind', m.kind, 'role', m.role, 'points', m.points,
+    'lengthMm', m.length_mm, 'widthMm', m.width_mm, 'heightMm', m.height_mm)) order by m.created_at, m.id)
+  from ${marks} m where m.clip_id = ${clips.id}), '[]'::json)`;
+
+/**
+ * The clip, what it is measured with, and its marks, read in one statement: one snapshot, so the
+ * marks and `clip.measureRevision` belong together (a mark change bumps the revision in its own
+ * statement, by trigger).
+ */
+// Prepared once per process: every save runs it, and building the query each time costs more than running it.
+const measureInputsQuery = db
+  .select({ clip: measuredClipColumns, handedness: golfers.handedness, staticLoftDeg: builds.loftDeg, settings: studios.settings, marks: marksJson })
+  .from(clips)
+  .innerJoin(fittings, eq(fittings.id, clips.fittingId))
+  .innerJoin(golfers, eq(golfers.id, fittings.golferId))
+  .innerJoin(builds, eq(builds.id, clips.buildId))
+  .innerJoin(studios, eq(studios.id, clips.studioId))
+  .where(eq(clips.id, sql.placeholder("clipId")))
+  .prepare("measure_inputs");
+
+async function readMeasureInputs(clipId: string) {
+  const [row] = await measureInputsQuery.execute({ clipId });
+  if (!row) throw notFound("No such clip");
+  return row;
 }
 
-/** Recomputes and stores every measurement of a locked clip (one row per key); returns them. */
-export async function recomputeMeasurements(tx: Tx, locked: LockedClip, computedBy: string): Promise<Measurement[]> {
-  const context = clipContext(locked);
+// One computation's rows arrive as a single JSON parameter (one per key) and go in with one prepared statement.
+const incoming = sql`jsonb_to_recordset(${sql.placeholder("rows")}::jsonb) as r(key text, value double precision, unit text, frames jsonb, mark_ids jsonb, needs jsonb)`;
+const excluded = (column: string) => sql.raw(`excluded.${column}`);
+const storeQuery = db
+  .insert(measurements)
+  .select(
+    db
+      .select({
+        id: sql`gen_random_uuid()`.as("id"),
+        studioId: sql`${sql.placeholder("studioId")}::uuid`.as("studio_id"),
+        clipId: sql`${sql.placeholder("clipId")}::uuid`.as("clip_id"),
+        key: sql`r.key`.as("key"),
+        value: sql`r.value`.as("value"),
+        unit: sql`r.unit`.as("unit"),
+        frames: sql`r.frames`.as("frames"),
+        markIds: sql`r.mark_ids`.as("mark_ids"),
+        needs: sql`r.needs`.as("needs"),
+        method: sql`'derived'::measurement_method`.as("method"),
+        computedBy: sql`${sql.placeholder("computedBy")}::uuid`.as("computed_by"),
+        computedAt: sql`now()`.as("computed_at"),
+        measureRevision: sql`${sql.placeholder("measureRevision")}::int`.as("measure_revision"),
+      })
+      .from(incoming),
+  )
+  .onConflictDoUpdate({
+    target: [measurements.clipId, measurements.key],
+    set: {
+      value: excluded("value"), unit: excluded("unit"), frames: excluded("frames"), markIds: excluded("mark_ids"), needs: excluded("needs"),
+      method: excluded("method"), computedBy: excluded("computed_by"), computedAt: excluded("computed_at"), measureRevision: excluded("measure_revision"),
+    },
+    // Never over a computation from a later revision: concurrent saves may finish in any order.
+    setWhere: sql`${measurements.measureRevision} <= excluded.measure_revision`,
+  })
+  .prepare("measurements_store");
+
+/**
+ * Stores one computation, one row per key. A row is replaced only by a computation from the same
+ * or a later revision, so the stored values end up matching the latest marks.
+ */
+async function storeMeasurements(subject: MeasureSubject, computed: Measurement[], computedBy: string | null) {
+  const rows = computed.map((m) => ({
+    key: m.key, value: m.value, unit: m.unit,
+    frames: m.value === null ? [] : m.frames, mark_ids: m.value === null ? [] : m.markIds, needs: m.value === null ? m.needs : [],
+  }));
+  const { clip } = subject;
+  await storeQuery.execute({ rows: JSON.stringify(rows), studioId: clip.studioId, clipId: clip.id, computedBy, measureRevision: clip.measureRevision });
+}
+
+/**
+ * Recomputes a clip's measurements from its current marks and stores them; called after every
+ * change to the marks or the clip, once that change is committed. Returns them with the studio's windows.
+ */
+export async function refreshMeasurements(clipId: string, computedBy: string | null) {
+  const inputs = await readMeasureInputs(clipId);
+  const context = clipContext(inputs);
   if (!context) return [];
-  const computed = computeMeasurements(context, await clipMarks(tx, locked.clip.id));
-  const now = new Date();
-  await tx
-    .insert(measurements)
-    .values(computed.map((m) => ({
-      studioId: locked.clip.studioId,
-      clipId: locked.clip.id,
-      key: m.key,
-      value: m.value,
-      unit: m.unit,
-      frames: m.value === null ? [] : m.frames,
-      markIds: m.value === null ? [] : m.markIds,
-      needs: m.value === null ? m.needs : [],
-      method: "derived" as const,
-      computedBy,
-      computedAt: now,
-    })))
-    .onConflictDoUpdate({
-      target: [measurements.clipId, measurements.key],
-      set: {
-        value: sql`excluded.value`, unit: sql`excluded.unit`, frames: sql`excluded.frames`, markIds: sql`excluded.mark_ids`,
-        needs: sql`excluded.needs`, method: sql`excluded.method`, computedBy: sql`excluded.computed_by`, computedAt: sql`excluded.computed_at`,
-      },
-    });
-  return computed;
+  const computed = computeMeasurements(context, inputs.marks);
+  await storeMeasurements(inputs, computed, computedBy);
+  return presentMeasurements(computed, inputs.settings.windows);
 }
 
 type Window = { min: number; max: number };
@@ -123,8 +155,11 @@ export async function listMeasurements(actor: SignedInActor, clipId: string) {
   if (!context) return { measurements: [] };
   const stored = new Map((await db.select().from(measurements).where(and(eq(measurements.clipId, clipId), eq(measurements.studioId, loaded.clip.studioId)))).map((r) => [r.key, r]));
   const keys = METRICS_BY_VIEW[context.view].map((d) => d.key);
-  const rows = keys.map((k) => stored.get(k)).filter((r): r is Row => r !== undefined);
-  // Nothing stored yet (no change since the clip became ready): compute from the marks, store nothing.
-  const list = rows.length === keys.length ? rows.map(fromRow) : computeMeasurements(context, await clipMarks(db, clipId));
-  return { measurements: presentMeasurements(list, loaded.settings.windows) };
+  const rows = keys.map((k) => stored.get(k)).filter((r): r is Row => r !== undefined && r.measureRevision === loaded.clip.measureRevision);
+  if (rows.length === keys.length) return { measurements: presentMeasurements(rows.map(fromRow), loaded.settings.windows) };
+  // Nothing stored for the clip's current revision (never changed since processing, or a save
+  // stopped between its change and its recomputation): compute from the marks, store nothing.
+  const inputs = await readMeasureInputs(clipId);
+  const current = clipContext(inputs);
+  return { measurements: current ? presentMeasurements(computeMeasurements(current, inputs.marks), inputs.settings.windows) : [] };
 }

@@ -152,4 +152,34 @@ describe("concurrent changes", () => {
     // 5 px per frame at 50 px per 42.67 mm and 240 fps (the clip's capture rate).
     expect(stored!.value!).toBeCloseTo((5 * 42.67 / 50) * 240 / 1000, 9);
   });
+
+  it("serves a measurement computed from the current marks when the stored one is from an older revision", async () => {
+    const clip = await insertClip(w.own);
+    const path = `/api/clips/${clip.id}/marks`;
+    await call(fitter, "POST", path, { frame: 0, kind: "scale", role: "ball", points: [[600, 400], [650, 400]] });
+    await call(fitter, "POST", path, ball(301, 645, 400));
+    await call(fitter, "POST", path, ball(302, 650, 400));
+    // As if a save had stopped between its change (which bumps the revision) and its recomputation.
+    const rows = () => db.select().from(schema.measurements).where(eq(schema.measurements.clipId, clip.id));
+    await db.update(schema.measurements).set({ value: 99 }).where(eq(schema.measurements.clipId, clip.id));
+    await db.update(schema.clips).set({ measureRevision: (await rows())[0]!.measureRevision + 1 }).where(eq(schema.clips.id, clip.id));
+    const res = await call(fitter, "GET", `/api/clips/${clip.id}/measurements`);
+    const speed = res.body.measurements.find((m: { key: string }) => m.key === "ball_speed");
+    expect(speed.value).toBeCloseTo((5 * 42.67 / 50) * 240 / 1000, 9);
+    // The next save stores the current values again.
+    await call(fitter, "POST", path, ball(303, 655, 400));
+    const stored = (await rows()).find((r) => r.key === "ball_speed")!;
+    expect(stored.value).toBeCloseTo((5 * 42.67 / 50) * 240 / 1000, 9);
+  });
+
+  it("answers saves that race the clip's deletion with 200, 404 or 409, never an error", async () => {
+    const clip = await insertClip(w.own);
+    const path = `/api/clips/${clip.id}/marks`;
+    const drawn = await Promise.all(Array.from({ length: 10 }, (_, i) => call(fitter, "POST", path, ball(301 + i, 640 + i, 300))));
+    const saves = drawn.map((r) => call(fitter, "PATCH", `${path}/${r.body.mark.id}`, { version: 1, points: [[700, 300]] }));
+    await db.delete(schema.clips).where(eq(schema.clips.id, clip.id));
+    const statuses = (await Promise.all(saves)).map((r) => r.status);
+    expect(statuses.every((s) => [200, 404, 409].includes(s)), statuses.join(",")).toBe(true);
+    expect(await db.select().from(schema.marks).where(eq(schema.marks.clipId, clip.id))).toEqual([]);
+  });
 });
