@@ -6,6 +6,8 @@ cd "$ROOT"
 
 stack_env bench
 start_stack
+# Figures from a settled stack: the worker compiles and sets up its queue tables at start.
+for _ in $(seq 300); do grep -q "worker ready" "$DATA_DIR/worker.log" 2>/dev/null && break; sleep 0.1; done
 for bench in scripts/bench/*.ts; do
   name="$(basename "$bench" .ts)"
   [ "$name" = support ] && continue

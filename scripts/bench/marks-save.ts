@@ -11,7 +11,8 @@
  * BENCH_CLIP_IDS=id,id… to use ready clips of yours. BENCH_MODE=patch (default: each
  * connection moves marks no other connection holds, so no version conflicts) or post (new
  * marks). BENCH_CLIPS (default 1: every save contends for one clip's lock, the worst case),
- * BENCH_CONNECTIONS (50), BENCH_DURATION (10 s), BENCH_MARKS (marks drawn per clip first, 40).
+ * BENCH_CONNECTIONS (50), BENCH_DURATION (10 s), BENCH_MARKS (marks drawn per clip first, 40),
+ * BENCH_WARMUP (10 s of the same load first, not counted: a fresh server needs load before V8 has optimised its hot code).
  *
  * It then loads GET /api/me (sign-in by token and nothing else) the same way: the floor any
  * signed-in API route stands on with this web server on this machine, for comparison.
@@ -27,6 +28,7 @@ const mode = process.env.BENCH_MODE === "post" ? "post" : "patch";
 const connections = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const duration = Number(process.env.BENCH_DURATION ?? 10);
 const clipCount = Number(process.env.BENCH_CLIPS ?? 1);
+const warmup = Number(process.env.BENCH_WARMUP ?? 10);
 const marksPerClip = Math.max(Number(process.env.BENCH_MARKS ?? 40), Math.ceil((3 * connections) / clipCount));
 const headers = { authorization: `Bearer ${token}`, "content-type": "application/json" };
 
@@ -123,7 +125,9 @@ async function main() {
   try {
     const free = (await Promise.all(clipIds.map(drawMarks))).flat();
     console.log(`marks-save: ${mode.toUpperCase()} on ${clipIds.length} clip(s), ${free.length} marks, ${connections} connections, ${duration} s`);
-    const result = await autocannon({ url: base, connections, duration, headers, requests: [requestFor(free, clipIds)] });
+    const requests = [requestFor(free, clipIds)];
+    if (warmup > 0) await autocannon({ url: base, connections, duration: warmup, headers, requests });
+    const result = await autocannon({ url: base, connections, duration, headers, requests });
     const errors = result.errors + result.timeouts + result.non2xx;
     console.log(`p50 ${result.latency.p50} ms`);
     console.log(`p99 ${result.latency.p99} ms (goal ≤ 100 ms: ${result.latency.p99 <= 100 ? "met" : "missed"})`);
