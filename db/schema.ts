@@ -71,6 +71,13 @@ export const signInFailures = pgTable("sign_in_failures", {
   at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
 }, (t) => [index("sign_in_failures_lookup_idx").on(t.email, t.ip, t.at)]);
 
+// Accounts made on a public booking page, per client IP: a cap on how fast one network can make them.
+export const publicSignups = pgTable("public_signups", {
+  id: bigint("id", { mode: "number" }).primaryKey().generatedAlwaysAsIdentity(),
+  ip: text("ip").notNull(),
+  at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [index("public_signups_ip_at_idx").on(t.ip, t.at)]);
+
 export type GolferIntake = {
   puttingStyle?: string;
   usualMiss?: string;

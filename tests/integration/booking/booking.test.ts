@@ -90,6 +90,20 @@ describe("booking one slot", () => {
     const me = await call({ cookie: cookie! }, "GET", "/api/me");
     expect(me.body.role).toBe("golfer");
   });
+
+  it("makes at most 10 accounts an hour from one address, then answers 429", async () => {
+    // Addresses from TEST-NET-3 (RFC 5737), kept apart from the loopback calls of other tests.
+    const from = (ip: string, n: number) =>
+      call(null, "POST", `/api/booking/studios/${w.studioA.slug}/accounts`, { name: `Signup ${n}`, email: `signup.${n}.${ip}.${w.tag}@test.fitframe`, password: PASSWORD }, { "x-forwarded-for": ip });
+    const made = [];
+    for (let n = 0; n < 10; n++) made.push((await from("203.0.113.21", n)).status);
+    expect(made).toEqual(Array(10).fill(201));
+    const refused = await from("203.0.113.21", 10);
+    expect(refused.status).toBe(429);
+    expect(refused.body.error).toMatchObject({ code: "rate_limited" });
+    expect(refused.body.error.message).toMatch(/Too many new accounts/);
+    expect((await from("203.0.113.22", 0)).status).toBe(201);
+  });
 });
 
 describe("fee and webhook", () => {
