@@ -11,7 +11,9 @@ export const weeklyRulesSchema = z.object({
   rules: z
     .array(z.object({ weekday: z.number().int().min(1).max(7), start: clock, end: clock }))
     .max(50)
-    .refine((rules) => rules.every((r) => parseClock(r.start) < parseClock(r.end)), "Each opening must end after it starts"),
+    .refine((rules) => rules.every((r) => parseClock(r.start) < parseClock(r.end)), "Each opening must end after it starts")
+    .refine((rules) => !rules.some((a, i) => rules.some((b, j) => j > i && a.weekday === b.weekday && parseClock(a.start) < parseClock(b.end) && parseClock(b.start) < parseClock(a.end))),
+      "Two openings on the same weekday overlap: join them into one"),
 });
 
 export const closedDaySchema = z.object({

@@ -83,3 +83,27 @@ describe("booking and paying a fitting", () => {
     expect(moved).toBeDefined();
   });
 });
+
+describe("opening hours", () => {
+  it("the admin gives a fitter a split Monday, and an overlap is refused with the reason", async () => {
+    const admin = await (await browser.newContext()).newPage();
+    await signInThroughForm(admin, w.admin.email);
+    await admin.goto(`${BASE}/studio/availability`);
+    const hours = admin.getByRole("region", { name: `Opening hours of ${w.fitter2.name}` });
+    await hours.getByRole("button", { name: "Add hours on Monday" }).click();
+    await hours.getByLabel("Monday window 1 closes").fill("12:00");
+    await hours.getByRole("button", { name: "Add hours on Monday" }).click();
+    expect(await hours.getByLabel("Monday window 2 opens").inputValue()).toBe("13:00");
+    await hours.getByLabel("Monday window 2 closes").fill("18:00");
+    await hours.getByRole("button", { name: "Save hours" }).click();
+    await hours.getByRole("button", { name: "Saved" }).waitFor();
+    const rules = await db.select().from(schema.availabilityRules).where(eq(schema.availabilityRules.fitterUserId, w.fitter2.id));
+    expect(rules.map((r) => [r.weekday, r.startMinute, r.endMinute]).sort((a, b) => a[1]! - b[1]!)).toEqual([[1, 540, 720], [1, 780, 1080]]);
+
+    await admin.reload();
+    expect(await hours.getByLabel("Monday window 2 opens").inputValue()).toBe("13:00");
+    await hours.getByLabel("Monday window 2 opens").fill("11:00");
+    await hours.getByRole("button", { name: "Save hours" }).click();
+    expect(await hours.getByRole("alert").textContent()).toMatch(/overlap/);
+  });
+});
