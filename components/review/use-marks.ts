@@ -6,12 +6,13 @@ import { apiFetch, ApiClientError } from "@/lib/client/api";
 import { emptyHistory, record, redo, renameMark, undo, type Command, type History } from "@/lib/review/history";
 import { createBody, fieldsOf, patchBody, replaceMark, withoutMark, type MarkFields, type ReviewMark } from "@/lib/review/marks";
 import type { MarkDraft } from "@/lib/review/tools";
+import type { MeasurementsReply } from "./types";
 
 export const CONFLICT_MESSAGE = "This clip was changed in another window — reloaded the latest marks";
 
-// Writes answer with the mark (and the recomputed measurements) or with the bare mark.
-type Saved = ReviewMark | { mark: ReviewMark };
-const savedMark = (reply: Saved): ReviewMark => ("mark" in reply ? reply.mark : reply);
+// Writes answer with the mark and the clip's recomputed measurements.
+type Saved = { mark: ReviewMark; measurements: MeasurementsReply["measurements"] };
+type Deleted = { deleted: string; measurements: MeasurementsReply["measurements"] };
 
 export type Notice = { tone: "conflict" | "error"; text: string } | null;
 
@@ -30,6 +31,11 @@ export function useMarks(clipId: string) {
   const marksRef = useRef<ReviewMark[]>([]);
   const historyRef = useRef<History>(emptyHistory());
   const queue = useRef<Promise<void>>(Promise.resolve());
+  // A save's answer carries the measurements: show them without asking again.
+  const showMeasurements = useCallback(
+    (reply: { measurements: MeasurementsReply["measurements"] }) => queryClient.setQueryData<MeasurementsReply>(["measurements", clipId], { measurements: reply.measurements }),
+    [clipId, queryClient],
+  );
 
   const setMarks = useCallback((next: ReviewMark[]) => {
     marksRef.current = next;
@@ -60,7 +66,6 @@ export function useMarks(clipId: string) {
       setPending((n) => n + 1);
       queue.current = queue.current
         .then(work)
-        .then(() => queryClient.invalidateQueries({ queryKey: ["measurements", clipId] }))
         .catch(async (err: unknown) => {
           const stale = err instanceof ApiClientError && (err.status === 409 || err.status === 404);
           setNotice(stale ? { tone: "conflict", text: CONFLICT_MESSAGE } : { tone: "error", text: err instanceof Error ? err.message : String(err) });
@@ -81,18 +86,21 @@ export function useMarks(clipId: string) {
   };
 
   const post = async (m: Omit<ReviewMark, "id" | "version">) => {
-    const saved = savedMark(await apiFetch<Saved>(base, { method: "POST", body: createBody(m) }));
-    setMarks([...marksRef.current, saved]);
-    return saved;
+    const reply = await apiFetch<Saved>(base, { method: "POST", body: createBody(m) });
+    setMarks([...marksRef.current, reply.mark]);
+    showMeasurements(reply);
+    return reply.mark;
   };
   const patch = async (id: string, fields: Partial<MarkFields>) => {
-    const saved = savedMark(await apiFetch<Saved>(`${base}/${id}`, { method: "PATCH", body: patchBody(current(id).version, fields) }));
-    setMarks(replaceMark(marksRef.current, saved));
-    return saved;
+    const reply = await apiFetch<Saved>(`${base}/${id}`, { method: "PATCH", body: patchBody(current(id).version, fields) });
+    setMarks(replaceMark(marksRef.current, reply.mark));
+    showMeasurements(reply);
+    return reply.mark;
   };
   const remove = async (id: string) => {
-    await apiFetch<void>(`${base}/${id}?version=${current(id).version}`, { method: "DELETE" });
+    const reply = await apiFetch<Deleted>(`${base}/${id}?version=${current(id).version}`, { method: "DELETE" });
     setMarks(withoutMark(marksRef.current, id));
+    showMeasurements(reply);
   };
 
   /** Saves a command's effect; returns the new id when a mark was created again. */

@@ -3,9 +3,9 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { apiFetch } from "@/lib/client/api";
-import type { MomentName, ReviewMoments } from "./types";
+import type { MeasurementsReply, MomentName, ReviewMoments } from "./types";
 
-/** The clip's frame moments; setting one saves it and refreshes the measurements that use it. */
+/** The clip's frame moments; setting one saves it and shows the measurements recomputed with it. */
 export function useMoments(clipId: string, initial: ReviewMoments, onError: (text: string) => void) {
   const queryClient = useQueryClient();
   const [moments, setMoments] = useState(initial);
@@ -13,8 +13,8 @@ export function useMoments(clipId: string, initial: ReviewMoments, onError: (tex
     const before = moments;
     setMoments({ ...moments, [name]: frame });
     try {
-      await apiFetch(`/api/clips/${clipId}/moments`, { method: "PUT", body: { [name]: frame } });
-      await queryClient.invalidateQueries({ queryKey: ["measurements", clipId] });
+      const reply = await apiFetch<Pick<MeasurementsReply, "measurements">>(`/api/clips/${clipId}/moments`, { method: "PUT", body: { [name]: frame } });
+      queryClient.setQueryData<MeasurementsReply>(["measurements", clipId], { measurements: reply.measurements });
     } catch (err) {
       setMoments(before);
       onError(`Could not set ${name}: ${err instanceof Error ? err.message : String(err)}`);

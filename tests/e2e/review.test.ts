@@ -86,6 +86,12 @@ describe("clip review", () => {
 
   it("draws the target line and the face at address and at impact, and reads the true angles", async () => {
     page = await openClip();
+    // The readouts come from each save's answer: after the first load, no further measurement requests.
+    await expect.poll(() => readout(page, "aim").textContent()).toContain("Needs");
+    let measurementReads = 0;
+    page.on("request", (r) => {
+      if (r.url().endsWith("/measurements")) measurementReads += 1;
+    });
     expect(await page.getByTestId("frame-number").textContent()).toBe("0");
     await page.keyboard.press("Shift+A");
     await page.keyboard.press("2");
@@ -122,6 +128,7 @@ describe("clip review", () => {
     await expect.poll(() => readout(page, "face_angle_impact").getByTestId("value").textContent(), { timeout: 15_000 }).toBe(shown(impact));
     expect(await readout(page, "aim").textContent()).toContain("open");
     expect(await readout(page, "face_angle_impact").textContent()).toContain("closed");
+    expect(measurementReads).toBe(0);
   });
 
   it("undo removes the last mark and redo brings it back, through the API", async () => {
