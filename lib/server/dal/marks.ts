@@ -74,7 +74,6 @@ function presentMark(m: MarkRow) {
   return { id: m.id, clipId: m.clipId, ...markFields(m), authorUserId: m.authorUserId, version: m.version, createdAt: m.createdAt, updatedAt: m.updatedAt };
 }
 
-
 // The statements every save runs are prepared once per process: building a query with joins
 // costs more than running it (docs/benchmarks.md, marks-save).
 const placeholder = sql.placeholder;
