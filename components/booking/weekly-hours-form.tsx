@@ -53,11 +53,11 @@ export function WeeklyHoursForm({ fitter, rules }: Props) {
             <div className="flex flex-col gap-1">
               {week[day]!.length === 0 && <span className="flex min-h-touch items-center text-slate-500">Closed</span>}
               {week[day]!.map((w, n) => (
-                <div key={w.key} className="flex flex-wrap items-center gap-2">
-                  <input aria-label={`${name} window ${n + 1} opens`} type="time" required value={w.start} className="field num"
+                <div key={w.key} className="flex items-center gap-2">
+                  <input aria-label={`${name} window ${n + 1} opens`} type="time" required value={w.start} className="field num w-32! flex-none"
                     onChange={(e) => changeDay(day, (ws) => ws.map((x) => (x.key === w.key ? { ...x, start: e.target.value } : x)))} />
                   <span aria-hidden>–</span>
-                  <input aria-label={`${name} window ${n + 1} closes`} type="time" required value={w.end} className="field num"
+                  <input aria-label={`${name} window ${n + 1} closes`} type="time" required value={w.end} className="field num w-32! flex-none"
                     onChange={(e) => changeDay(day, (ws) => ws.map((x) => (x.key === w.key ? { ...x, end: e.target.value } : x)))} />
                   <button type="button" className="btn-quiet" aria-label={`Remove ${name} window ${n + 1}`} onClick={() => changeDay(day, (ws) => ws.filter((x) => x.key !== w.key))}>
                     Remove
