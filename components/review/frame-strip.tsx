@@ -43,7 +43,8 @@ export function FrameStrip({ frameCount, frame, signal, moments, suggestedImpact
       <svg className="absolute inset-x-0 top-2 h-10 w-full" viewBox={`0 0 ${Math.max(frameCount - 1, 1)} ${HEIGHT}`} preserveAspectRatio="none" aria-hidden>
         {signal && <polyline points={signalPoints(signal, HEIGHT)} fill="none" stroke="#8E9BA5" strokeWidth={1.5} vectorEffect="non-scaling-stroke" />}
       </svg>
-      {suggestedImpact !== null && (
+      {/* Once impact is confirmed on the suggested frame, one pin says both. */}
+      {suggestedImpact !== null && suggestedImpact !== moments.impact && (
         <Pin at={frameToPercent(suggestedImpact, frameCount)} text="suggested impact" dashed />
       )}
       {pins.map(([name, n]) => <Pin key={name} at={frameToPercent(n, frameCount)} text={name} />)}
@@ -52,11 +53,12 @@ export function FrameStrip({ frameCount, frame, signal, moments, suggestedImpact
   );
 }
 
+// The suggestion's label sits at the foot of the strip, so a moment set a few frames away never covers it.
 function Pin({ at, text, dashed = false }: { at: number; text: string; dashed?: boolean }) {
   return (
     <div className="pointer-events-none absolute inset-y-0" style={{ left: `${at}%` }}>
       <div className={`h-full border-l ${dashed ? "border-dashed border-slate-400" : "border-chalk"}`} />
-      <span className="absolute left-1 top-0 whitespace-nowrap text-[10px] leading-3 text-slate-200">{text}</span>
+      <span className={`absolute left-1 whitespace-nowrap text-[10px] leading-3 text-slate-200 ${dashed ? "bottom-0" : "top-0"}`}>{text}</span>
     </div>
   );
 }
