@@ -50,10 +50,10 @@ const marksJson = sql<StoredMark[]>`coalesce((
 
 /**
  * The clip, what it is measured with, and its marks, read in one statement: one snapshot, so the
- * marks and `clip.measureRevision` belong together (a mark change bumps the revision in its own
- * statement, by trigger).
+ * marks and `clip.measureRevision` belong together (every change bumps the revision in the
+ * statement that makes it: marks.ts, clips.ts). Prepared once per process: every save runs it,
+ * and building the query each time costs more than running it.
  */
-// Prepared once per process: every save runs it, and building the query each time costs more than running it.
 const measureInputsQuery = db
   .select({ clip: measuredClipColumns, handedness: golfers.handedness, staticLoftDeg: builds.loftDeg, settings: studios.settings, marks: marksJson })
   .from(clips)
