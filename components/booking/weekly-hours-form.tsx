@@ -27,6 +27,8 @@ export function WeeklyHoursForm({ fitter, rules }: Props) {
   const { save, pending, error, saved } = useSave();
   const [week, setWeek] = useState(() => weekOf(rules));
   const changeDay = (day: number, change: (windows: Window[]) => Window[]) => setWeek((w) => w.map((windows, i) => (i === day ? change(windows) : windows)));
+  const setTime = (day: number, key: number, edge: "start" | "end", value: string) =>
+    changeDay(day, (windows) => windows.map((x) => (x.key === key ? { ...x, [edge]: value } : x)));
   // A new window starts an hour after the day's last one ends (09:00–17:00 on a closed day).
   const addWindow = (day: number) =>
     changeDay(day, (windows) => {
@@ -55,10 +57,10 @@ export function WeeklyHoursForm({ fitter, rules }: Props) {
               {week[day]!.map((w, n) => (
                 <div key={w.key} className="flex items-center gap-2">
                   <input aria-label={`${name} window ${n + 1} opens`} type="time" required value={w.start} className="field num w-32! flex-none"
-                    onChange={(e) => changeDay(day, (ws) => ws.map((x) => (x.key === w.key ? { ...x, start: e.target.value } : x)))} />
+                    onChange={(e) => setTime(day, w.key, "start", e.target.value)} />
                   <span aria-hidden>–</span>
                   <input aria-label={`${name} window ${n + 1} closes`} type="time" required value={w.end} className="field num w-32! flex-none"
-                    onChange={(e) => changeDay(day, (ws) => ws.map((x) => (x.key === w.key ? { ...x, end: e.target.value } : x)))} />
+                    onChange={(e) => setTime(day, w.key, "end", e.target.value)} />
                   <button type="button" className="btn-quiet" aria-label={`Remove ${name} window ${n + 1}`} onClick={() => changeDay(day, (ws) => ws.filter((x) => x.key !== w.key))}>
                     Remove
                   </button>

@@ -5,6 +5,7 @@ import { apiFetch } from "@/lib/client/api";
 import { METRICS_BY_VIEW, signWordsFor } from "@/lib/metrics/keys";
 import { sideWords, valueText, type Window } from "@/lib/review/readout";
 import { Gauge } from "./gauge";
+import { measurementsKey } from "./measurements-cache";
 import type { MeasurementsReply, ReviewClip } from "./types";
 
 const VIEW_TITLE: Record<ReviewClip["view"], string> = { overhead: "Overhead", "face-on": "Face-on", "down-the-line": "Down-the-line" };
@@ -12,7 +13,7 @@ const VIEW_TITLE: Record<ReviewClip["view"], string> = { overhead: "Overhead", "
 /** The view's measurements beside the frame: value with sign and side, or what it still needs. */
 export function Readouts({ clip }: { clip: ReviewClip }) {
   const { data, error } = useQuery({
-    queryKey: ["measurements", clip.id],
+    queryKey: measurementsKey(clip.id),
     queryFn: () => apiFetch<MeasurementsReply>(`/api/clips/${clip.id}/measurements`),
   });
   const byKey = new Map((data?.measurements ?? []).map((m) => [m.key, m]));

@@ -6,6 +6,7 @@ import { apiFetch, ApiClientError } from "@/lib/client/api";
 import { emptyHistory, record, redo, renameMark, undo, type Command, type History } from "@/lib/review/history";
 import { createBody, fieldsOf, patchBody, replaceMark, withoutMark, type MarkFields, type ReviewMark } from "@/lib/review/marks";
 import type { MarkDraft } from "@/lib/review/tools";
+import { measurementsKey, showMeasurements } from "./measurements-cache";
 import type { MeasurementsReply } from "./types";
 
 export const CONFLICT_MESSAGE = "This clip was changed in another window — reloaded the latest marks";
@@ -31,11 +32,6 @@ export function useMarks(clipId: string) {
   const marksRef = useRef<ReviewMark[]>([]);
   const historyRef = useRef<History>(emptyHistory());
   const queue = useRef<Promise<void>>(Promise.resolve());
-  // A save's answer carries the measurements: show them without asking again.
-  const showMeasurements = useCallback(
-    (reply: { measurements: MeasurementsReply["measurements"] }) => queryClient.setQueryData<MeasurementsReply>(["measurements", clipId], { measurements: reply.measurements }),
-    [clipId, queryClient],
-  );
 
   const setMarks = useCallback((next: ReviewMark[]) => {
     marksRef.current = next;
@@ -72,7 +68,7 @@ export function useMarks(clipId: string) {
           // After someone else's change, undoing ours could silently revert theirs: start a fresh history.
           if (stale) setHistory(emptyHistory());
           await reload().catch(() => undefined);
-          await queryClient.invalidateQueries({ queryKey: ["measurements", clipId] });
+          await queryClient.invalidateQueries({ queryKey: measurementsKey(clipId) });
         })
         .finally(() => setPending((n) => n - 1));
     },
@@ -88,19 +84,19 @@ export function useMarks(clipId: string) {
   const post = async (m: Omit<ReviewMark, "id" | "version">) => {
     const reply = await apiFetch<Saved>(base, { method: "POST", body: createBody(m) });
     setMarks([...marksRef.current, reply.mark]);
-    showMeasurements(reply);
+    showMeasurements(queryClient, clipId, reply); // the answer carries them: no second request
     return reply.mark;
   };
   const patch = async (id: string, fields: Partial<MarkFields>) => {
     const reply = await apiFetch<Saved>(`${base}/${id}`, { method: "PATCH", body: patchBody(current(id).version, fields) });
     setMarks(replaceMark(marksRef.current, reply.mark));
-    showMeasurements(reply);
+    showMeasurements(queryClient, clipId, reply);
     return reply.mark;
   };
   const remove = async (id: string) => {
     const reply = await apiFetch<Deleted>(`${base}/${id}?version=${current(id).version}`, { method: "DELETE" });
     setMarks(withoutMark(marksRef.current, id));
-    showMeasurements(reply);
+    showMeasurements(queryClient, clipId, reply);
   };
 
   /** Saves a command's effect; returns the new id when a mark was created again. */

@@ -3,6 +3,7 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { apiFetch } from "@/lib/client/api";
+import { showMeasurements } from "./measurements-cache";
 import type { MeasurementsReply, MomentName, ReviewMoments } from "./types";
 
 /** The clip's frame moments; setting one saves it and shows the measurements recomputed with it. */
@@ -14,7 +15,7 @@ export function useMoments(clipId: string, initial: ReviewMoments, onError: (tex
     setMoments({ ...moments, [name]: frame });
     try {
       const reply = await apiFetch<Pick<MeasurementsReply, "measurements">>(`/api/clips/${clipId}/moments`, { method: "PUT", body: { [name]: frame } });
-      queryClient.setQueryData<MeasurementsReply>(["measurements", clipId], { measurements: reply.measurements });
+      showMeasurements(queryClient, clipId, reply);
     } catch (err) {
       setMoments(before);
       onError(`Could not set ${name}: ${err instanceof Error ? err.message : String(err)}`);

@@ -10,6 +10,9 @@ let w: World;
 let fitter: Auth, coach: Auth, golfer: Auth, otherAdmin: Auth;
 let clipId = "";
 const marksPath = () => `/api/clips/${clipId}/marks`;
+// 5 px per frame with a 50 px ball scale at 240 fps (the test clip's capture rate), in m/s; the
+// ball is 42.67 mm across (R&A/USGA Equipment Rules 2019, Appendix III).
+const FIVE_PX_PER_FRAME_SPEED = ((5 * 42.67) / 50) * 240 / 1000;
 const ball = (frame: number, x = 640, y = 300) => ({ frame, kind: "point", role: "ball", points: [[x, y]] });
 
 beforeAll(async () => {
@@ -149,8 +152,7 @@ describe("concurrent changes", () => {
     const [stored] = await db.select().from(schema.measurements).where(eq(schema.measurements.clipId, clip.id)).then((rows) => rows.filter((r) => r.key === "ball_speed"));
     const ballIds = made.map((r) => r.body.mark.id as string);
     expect(stored!.markIds).toEqual(expect.arrayContaining(ballIds));
-    // 5 px per frame at 50 px per 42.67 mm and 240 fps (the clip's capture rate).
-    expect(stored!.value!).toBeCloseTo((5 * 42.67 / 50) * 240 / 1000, 9);
+    expect(stored!.value!).toBeCloseTo(FIVE_PX_PER_FRAME_SPEED, 9);
   });
 
   it("serves a measurement computed from the current marks when the stored one is from an older revision", async () => {
@@ -165,11 +167,11 @@ describe("concurrent changes", () => {
     await db.update(schema.clips).set({ measureRevision: (await rows())[0]!.measureRevision + 1 }).where(eq(schema.clips.id, clip.id));
     const res = await call(fitter, "GET", `/api/clips/${clip.id}/measurements`);
     const speed = res.body.measurements.find((m: { key: string }) => m.key === "ball_speed");
-    expect(speed.value).toBeCloseTo((5 * 42.67 / 50) * 240 / 1000, 9);
+    expect(speed.value).toBeCloseTo(FIVE_PX_PER_FRAME_SPEED, 9);
     // The next save stores the current values again.
     await call(fitter, "POST", path, ball(303, 655, 400));
     const stored = (await rows()).find((r) => r.key === "ball_speed")!;
-    expect(stored.value).toBeCloseTo((5 * 42.67 / 50) * 240 / 1000, 9);
+    expect(stored.value).toBeCloseTo(FIVE_PX_PER_FRAME_SPEED, 9);
   });
 
   it("answers saves that race the clip's deletion with 200, 404 or 409, never an error", async () => {
