@@ -15,7 +15,9 @@ export const markKindEnum = pgEnum("mark_kind", ["point", "line", "angle", "scal
 export const markRoleEnum = pgEnum("mark_role", [
   "face", "target", "path", "shaft", "sole", "ground", "ball", "clubhead", "marker",
 ]);
-export const measurementMethodEnum = pgEnum("measurement_method", ["manual", "derived", "suggested"]);
+// "derived" is kept for rows stored before marks had a source; new rows say which marks they used.
+export const measurementMethodEnum = pgEnum("measurement_method", ["manual", "derived", "suggested", "marked", "tracked", "mixed"]);
+export const markSourceEnum = pgEnum("mark_source", ["hand", "tracked"]);
 
 const timestamps = {
   createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
@@ -143,6 +145,13 @@ export const builds = pgTable("builds", {
   headMassG: real("head_mass_g"),
   gripName: text("grip_name").notNull().default(""),
   gripMassG: real("grip_mass_g"),
+  // Grip shape for the Equipment Rules' putter-grip checks (largest cross-section, a second grip).
+  gripMaxWidthIn: real("grip_max_width_in"),
+  gripCount: integer("grip_count").notNull().default(1),
+  gripsCircular: boolean("grips_circular"),
+  gripGapIn: real("grip_gap_in"),
+  // The head's designed shaft lean at normal address along the line of play, + toward the target.
+  designShaftLeanDeg: real("design_shaft_lean_deg"),
   shaftMassG: real("shaft_mass_g"),
   balancePointIn: real("balance_point_in"),
   alignmentAid: text("alignment_aid").notNull().default(""),
@@ -184,6 +193,9 @@ export const clips = pgTable("clips", {
   containerFps: doublePrecision("container_fps"),
   motionSignal: jsonb("motion_signal").$type<number[]>(),
   suggestedImpactFrame: integer("suggested_impact_frame"),
+  // The worker's tracking pass: on unless the fitter turns it off; its summary once it has run.
+  trackingEnabled: boolean("tracking_enabled").notNull().default(true),
+  tracking: jsonb("tracking").$type<Record<string, unknown>>(),
   addressFrame: integer("address_frame"),
   takeawayFrame: integer("takeaway_frame"),
   topFrame: integer("top_frame"),
@@ -214,6 +226,9 @@ export const marks = pgTable("marks", {
   lengthMm: real("length_mm"),
   widthMm: real("width_mm"),
   heightMm: real("height_mm"),
+  source: markSourceEnum("source").notNull().default("hand"),
+  // One standard deviation of each point, px; null means the stated default for a hand click.
+  precisionPx: real("precision_px"),
   authorUserId: uuid("author_user_id").references(() => users.id, { onDelete: "set null" }),
   version: integer("version").notNull().default(1),
   ...timestamps,
@@ -225,6 +240,8 @@ export const measurements = pgTable("measurements", {
   clipId: uuid("clip_id").notNull().references(() => clips.id, { onDelete: "cascade" }),
   key: text("key").notNull(),
   value: doublePrecision("value"),
+  // One standard error of the value, same unit (docs/measurements.md, "Uncertainty").
+  uncertainty: doublePrecision("uncertainty"),
   unit: text("unit").notNull(),
   frames: jsonb("frames").$type<number[]>().notNull().default([]),
   markIds: jsonb("mark_ids").$type<string[]>().notNull().default([]),

@@ -22,6 +22,22 @@ export type MarkInput = {
   heightMm?: number;
 };
 
-export type StoredMark = MarkInput & { id: string };
+/** Who placed a mark: a person's click, or the worker's tracking pass (a proposal). */
+export const MARK_SOURCES = ["hand", "tracked"] as const;
+export type MarkSource = (typeof MARK_SOURCES)[number];
+
+/**
+ * One standard deviation of a hand-placed point, px: a click on a frame is good to about a pixel
+ * (common practice for manual digitising). Used when a mark states no precision of its own.
+ */
+export const HAND_CLICK_PRECISION_PX = 1;
+
+export type StoredMark = MarkInput & {
+  id: string;
+  /** Absent means "hand" (marks stored before tracking existed). */
+  source?: MarkSource;
+  /** One standard deviation of each point in px; absent means HAND_CLICK_PRECISION_PX. */
+  precisionPx?: number | null;
+};
 
 export type ClipFrameInfo = { width: number; height: number; frameCount: number; view: View };
