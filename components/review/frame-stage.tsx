@@ -2,11 +2,11 @@
 
 import type Konva from "konva";
 import { useEffect, useLayoutEffect, useRef, useState } from "react";
-import { Circle, Image as KonvaImage, Layer, Line, Stage } from "react-konva";
+import { Circle, Image as KonvaImage, Label, Layer, Line, Stage, Tag, Text } from "react-konva";
 import type { Vec2 } from "@/lib/geometry/vector";
 import type { MarkRole } from "@/lib/marks/types";
-import { moveHandle, type ReviewMark } from "@/lib/review/marks";
-import type { Tool } from "@/lib/review/tools";
+import { isProposal, moveHandle, type ReviewMark } from "@/lib/review/marks";
+import { planeSideLabels, type SideLabel, type Tool, type ToolOptions } from "@/lib/review/tools";
 import { insideImage, panBy, pinch, screenToImage, zoomAbout, type Size, type Viewport } from "@/lib/review/viewport";
 import type { FrameStore } from "./frame-store";
 import { MarkShape } from "./mark-shape";
@@ -33,6 +33,10 @@ type Props = {
   tool: Tool;
   placed: Vec2[];
   role: MarkRole;
+  /** The plane tool's known sizes, named on the sides as the corners go down. */
+  planeSizes: Pick<ToolOptions, "widthMm" | "heightMm">;
+  /** When the fitter accepted the clip's tracking; proposals are drawn quieter until then. */
+  acceptedAt: string | null;
   panKey: boolean;
   onPress: (p: Vec2) => void;
   onMoveHandle: (id: string, index: number, to: Vec2) => void;
@@ -128,6 +132,13 @@ export default function FrameStage(props: Props) {
   const shown = (m: ReviewMark) => (drag && drag.id === m.id ? { ...m, points: moveHandle(m.points, drag.index, drag.to) } : m);
   const preview = props.placed.length > 0 ? [...props.placed, ...(hover ? [hover] : [])] : [];
   const cursor = panKey || tool === "select" ? "grab" : "crosshair";
+  const selectedPlane = props.marks.find((m) => m.id === props.selectedId && m.kind === "plane");
+  const sideLabels: SideLabel[] =
+    tool === "plane" && preview.length > 1
+      ? planeSideLabels(preview, props.planeSizes)
+      : selectedPlane
+        ? planeSideLabels(shown(selectedPlane).points, { widthMm: selectedPlane.widthMm ?? 0, heightMm: selectedPlane.heightMm ?? 0 })
+        : [];
 
   return (
     <Stage
@@ -150,14 +161,20 @@ export default function FrameStage(props: Props) {
       </Layer>
       <Layer listening={tool === "select" && !panKey}>
         {props.ghosts.map((m) => (
-          <MarkShape key={m.id} mark={m} unit={unit} selected={false} ghost editable={false} onSelect={props.onSelect} onDragHandle={onDragHandle} />
+          <MarkShape key={m.id} mark={m} unit={unit} selected={false} ghost proposal={isProposal(m, props.acceptedAt)} editable={false} onSelect={props.onSelect} onDragHandle={onDragHandle} />
         ))}
         {props.marks.map((m) => (
-          <MarkShape key={m.id} mark={shown(m)} unit={unit} selected={m.id === props.selectedId} ghost={false} editable onSelect={props.onSelect} onDragHandle={onDragHandle} />
+          <MarkShape key={m.id} mark={shown(m)} unit={unit} selected={m.id === props.selectedId} ghost={false} proposal={isProposal(m, props.acceptedAt)} editable onSelect={props.onSelect} onDragHandle={onDragHandle} />
         ))}
         {preview.length > 1 && <Line points={preview.flat()} stroke={ROLE_LOOK[props.role].colour} strokeWidth={2 * unit} dash={[6 * unit, 4 * unit]} listening={false} />}
         {props.placed.map((p, i) => (
           <Circle key={i} x={p[0]} y={p[1]} radius={5 * unit} fill={ROLE_LOOK[props.role].colour} listening={false} />
+        ))}
+        {sideLabels.map((l) => (
+          <Label key={l.text} x={l.at[0]} y={l.at[1]} listening={false}>
+            <Tag fill="#0E1A24" opacity={0.8} cornerRadius={3 * unit} />
+            <Text text={l.text} fontSize={12 * unit} padding={3 * unit} fill={ROLE_LOOK.ground.colour} />
+          </Label>
         ))}
       </Layer>
     </Stage>

@@ -12,6 +12,8 @@ type Props = {
   unit: number;
   selected: boolean;
   ghost: boolean;
+  /** A tracked mark not yet accepted: the role's colour, quieter, hollow handles, dashed line (LOOK.md). */
+  proposal: boolean;
   editable: boolean;
   onSelect: (id: string) => void;
   onDragHandle: (id: string, index: number, to: Vec2, done: boolean) => void;
@@ -22,9 +24,10 @@ const HANDLE_RADIUS = 8;
 /** How the points of each kind join up: a closed quad for a plane, an open polyline otherwise. */
 const outline = (m: ReviewMark) => (m.kind === "plane" ? [...m.points, m.points[0]!] : m.points).flat();
 
-export function MarkShape({ mark, unit, selected, ghost, editable, onSelect, onDragHandle }: Props) {
+export function MarkShape({ mark, unit, selected, ghost, proposal, editable, onSelect, onDragHandle }: Props) {
   const look = ROLE_LOOK[mark.role];
   const isPoint = mark.kind === "point";
+  const solidPoint = isPoint && !proposal;
   const select = (e: Konva.KonvaEventObject<PointerEvent>) => {
     if (!editable) return;
     e.cancelBubble = true;
@@ -32,7 +35,7 @@ export function MarkShape({ mark, unit, selected, ghost, editable, onSelect, onD
   };
   const handleAt = (e: Konva.KonvaEventObject<DragEvent>): Vec2 => [e.target.x(), e.target.y()];
   return (
-    <Group opacity={ghost ? 0.45 : 1} listening={editable}>
+    <Group opacity={(ghost ? 0.45 : 1) * (proposal ? 0.65 : 1)} listening={editable} name={proposal ? "proposal" : "mark"}>
       {!isPoint && (
         <Line
           points={outline(mark)}
@@ -41,6 +44,7 @@ export function MarkShape({ mark, unit, selected, ghost, editable, onSelect, onD
           hitStrokeWidth={14 * unit}
           lineCap="round"
           lineJoin="round"
+          dash={proposal ? [7 * unit, 5 * unit] : undefined}
           onPointerDown={select}
         />
       )}
@@ -52,15 +56,15 @@ export function MarkShape({ mark, unit, selected, ghost, editable, onSelect, onD
         >
           <Circle
             radius={(isPoint ? HANDLE_RADIUS : HANDLE_RADIUS - 1) * unit}
-            fill={isPoint ? look.colour : "#0E1A24"}
-            stroke={isPoint ? "#0E1A24" : look.colour}
+            fill={solidPoint ? look.colour : proposal ? "transparent" : "#0E1A24"}
+            stroke={solidPoint ? "#0E1A24" : look.colour}
             strokeWidth={(selected ? 3 : 2) * unit}
           />
           <Text
             text={look.letter}
             fontSize={10 * unit}
             fontStyle="bold"
-            fill={isPoint ? "#0E1A24" : look.colour}
+            fill={solidPoint ? "#0E1A24" : look.colour}
             width={20 * unit}
             height={20 * unit}
             offsetX={10 * unit}

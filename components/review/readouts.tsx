@@ -3,14 +3,14 @@
 import { useQuery } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/client/api";
 import { METRICS_BY_VIEW, signWordsFor } from "@/lib/metrics/keys";
-import { sideWords, valueText, type Window } from "@/lib/review/readout";
+import { methodWord, sideWords, uncertaintyText, valueText, type Window } from "@/lib/review/readout";
 import { Gauge } from "./gauge";
 import { measurementsKey } from "./measurements-cache";
 import type { MeasurementsReply, ReviewClip } from "./types";
 
 const VIEW_TITLE: Record<ReviewClip["view"], string> = { overhead: "Overhead", "face-on": "Face-on", "down-the-line": "Down-the-line" };
 
-/** The view's measurements beside the frame: value with sign and side, or what it still needs. */
+/** The view's measurements beside the frame: value with its ± and side, how it was made, or what it still needs. */
 export function Readouts({ clip }: { clip: ReviewClip }) {
   const { data, error } = useQuery({
     queryKey: measurementsKey(clip.id),
@@ -26,14 +26,20 @@ export function Readouts({ clip }: { clip: ReviewClip }) {
           const m = byKey.get(def.key);
           const words = signWordsFor(clip.view, def.key, clip.handedness);
           const window: Window | undefined = m?.window ?? data?.windows?.[def.key] ?? clip.windows[def.key];
+          const uncertainty = m?.uncertainty ?? null;
+          const method = methodWord(m?.method);
           return (
             <div key={def.key} data-testid={`readout-${def.key}`} className="border-b border-ink-700 pb-2">
-              <dt className="text-label text-slate-300">{def.label}</dt>
+              <dt className="flex items-baseline justify-between text-label text-slate-300">
+                {def.label}
+                {method && m?.value != null && <span className="text-[11px] text-slate-400" data-testid="method">{method}</span>}
+              </dt>
               {m && m.value !== null ? (
                 <dd>
                   <span className="num text-readout text-chalk" data-testid="value">{valueText(m.value, m.unit, words !== null)}</span>
+                  {uncertainty !== null && <span className="num ml-1.5 text-body font-light text-slate-300" data-testid="uncertainty">{uncertaintyText(uncertainty, m.unit)}</span>}
                   <span className="ml-2 text-body text-slate-200">{sideWords(m.value, m.unit, words)}</span>
-                  {window && <Gauge value={m.value} window={window} label={def.label} />}
+                  {window && <Gauge value={m.value} uncertainty={uncertainty} unit={m.unit} signed={words !== null} window={window} label={def.label} />}
                 </dd>
               ) : (
                 <dd className="text-label text-slate-400">{m?.needs?.length ? `Needs ${m.needs.join("; ")}` : "Not measured yet"}</dd>

@@ -8,7 +8,8 @@ import { POINTS_PER_KIND, type MarkRole } from "@/lib/marks/types";
 import { canRedo, canUndo } from "@/lib/review/history";
 import { clampFrame } from "@/lib/review/frames";
 import type { KeyCommand } from "@/lib/review/keys";
-import { moveHandle, type ReviewMark } from "@/lib/review/marks";
+import { isProposal, moveHandle, type ReviewMark } from "@/lib/review/marks";
+import { canAccept } from "@/lib/review/tracking";
 import { cancel, DEFAULT_TOOL_OPTIONS, idle, KIND_OF_TOOL, placedPoints, press, type Tool, type ToolOptions, type ToolState } from "@/lib/review/tools";
 import { fitViewport, zoomAbout, type Size, type Viewport } from "@/lib/review/viewport";
 import { FrameMarks } from "./frame-marks";
@@ -21,10 +22,12 @@ import { Readouts } from "./readouts";
 import { StageBox } from "./stage-box";
 import { ToolOptionsBar } from "./tool-options";
 import { ToolRail } from "./tool-rail";
+import { TrackingPanel } from "./tracking-panel";
 import type { ReviewClip } from "./types";
 import { useMarks } from "./use-marks";
 import { useMoments } from "./use-moments";
 import { useReviewKeys } from "./use-review-keys";
+import { useTracking } from "./use-tracking";
 
 const VIEW_NAME: Record<ReviewClip["view"], string> = { overhead: "Overhead", "face-on": "Face-on", "down-the-line": "Down-the-line" };
 
@@ -35,7 +38,8 @@ const isGhost = (m: ReviewMark, frame: number) =>
 export function ReviewScreen({ clip }: { clip: ReviewClip }) {
   const store = useMemo(() => new FrameStore(clip.id, clip.frameCount, clip.width, clip.height), [clip.id, clip.frameCount, clip.width, clip.height]);
   const marks = useMarks(clip.id);
-  const { moments, setMoment } = useMoments(clip.id, clip.moments, marks.report);
+  const { moments, setMoment, replaceMoments } = useMoments(clip.id, clip.moments, marks.report);
+  const tracking = useTracking(clip, { reloadMarks: marks.reload, replaceMoments, report: marks.report });
   const [frame, setFrame] = useState(() => clampFrame(clip.moments.address ?? 0, clip.frameCount));
   const [toolState, setToolState] = useState<ToolState>(() => idle("select"));
   const [pickedRole, setPickedRole] = useState<MarkRole>("face");
@@ -85,7 +89,7 @@ export function ReviewScreen({ clip }: { clip: ReviewClip }) {
       case "first": return goTo(0);
       case "last": return goTo(clip.frameCount - 1);
       case "jump": {
-        const n = moments[c.moment] ?? (c.moment === "impact" ? clip.suggestedImpactFrame : null);
+        const n = moments[c.moment] ?? (c.moment === "impact" ? tracking.suggestedImpact : null);
         return n === null ? marks.report(`No ${c.moment} frame yet: press Shift+${c.moment === "address" ? "A" : "I"} on it.`) : goTo(n);
       }
       case "setMoment": return void setMoment(c.moment, frame);
@@ -96,11 +100,16 @@ export function ReviewScreen({ clip }: { clip: ReviewClip }) {
       case "cancel": return toolState.phase === "placing" ? setToolState(cancel(toolState)) : setSelectedId(null);
       case "tool": return chooseTool(c.tool);
       case "help": return setHelpOpen((o) => !o);
+      case "acceptProposals":
+        if (tracking.busy) return;
+        return canAccept(tracking.enabled, tracking.tracking) ? void tracking.accept() : marks.report("Nothing to accept: no tracked marks are waiting on this clip.");
     }
   };
   useReviewKeys(onCommand, setSpaceHeld, helpOpen);
   const onResize = useCallback((s: Size) => setStageSize(s), []);
   const pointsNeeded = kind && tool !== "select" ? POINTS_PER_KIND[kind] : 0;
+  const acceptedAt = tracking.tracking?.acceptedAt ?? null;
+  const proposals = marks.marks.filter((m) => isProposal(m, acceptedAt)).length;
 
   return (
     <div className="fixed inset-0 z-20 flex flex-col bg-ink text-chalk [&_*:focus-visible]:outline-signal" data-saving={marks.saving ? "1" : "0"}>
@@ -120,18 +129,20 @@ export function ReviewScreen({ clip }: { clip: ReviewClip }) {
         <section className="relative min-w-0 flex-1" aria-label="Frame">
           <StageBox image={image} stage={stageSize} onResize={onResize} store={store} frame={frame} viewport={viewport} fitScale={fit.scale}
             onViewport={setUserViewport} marks={onFrame} ghosts={ghosts} selectedId={selected?.id ?? null} onSelect={setSelectedId}
-            tool={tool} placed={placedPoints(toolState)} role={role ?? "face"} panKey={spaceHeld} onPress={onPress} onMoveHandle={onMoveHandle} />
+            tool={tool} placed={placedPoints(toolState)} role={role ?? "face"} planeSizes={options} acceptedAt={acceptedAt} panKey={spaceHeld}
+            onPress={onPress} onMoveHandle={onMoveHandle} />
           <NoticeBar notice={marks.notice} onDismiss={marks.dismissNotice} />
         </section>
         <aside className="flex w-panel shrink-0 flex-col border-l border-ink-700 bg-ink-800">
+          <TrackingPanel tracking={tracking} proposals={proposals} />
           <Readouts clip={clip} />
-          <FrameMarks marks={onFrame} selectedId={selected?.id ?? null} onSelect={(id) => {
+          <FrameMarks marks={onFrame} acceptedAt={acceptedAt} selectedId={selected?.id ?? null} onSelect={(id) => {
             setToolState(idle("select"));
             setSelectedId(id);
           }} />
         </aside>
       </div>
-      <FrameStrip frameCount={clip.frameCount} frame={frame} signal={clip.motionSignal} moments={moments} suggestedImpact={clip.suggestedImpactFrame} onSeek={goTo} />
+      <FrameStrip frameCount={clip.frameCount} frame={frame} signal={clip.motionSignal} moments={moments} suggestedImpact={tracking.suggestedImpact} onSeek={goTo} />
       <HelpDialog open={helpOpen} onClose={() => setHelpOpen(false)} />
     </div>
   );

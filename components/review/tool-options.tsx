@@ -43,7 +43,10 @@ export function ToolOptionsBar({ tool, roles, role, onRole, options, onOptions, 
         </label>
       )}
       {tool === "scale" && num("lengthMm", "Known length (mm)")}
-      {tool === "plane" && (<>{num("widthMm", "Width (mm)")}{num("heightMm", "Height (mm)")}</>)}
+      {tool === "plane" && (<>
+        {num("widthMm", "Width (mm), corner 1 → 2")}{num("heightMm", "Height (mm), corner 2 → 3")}
+        <span className="text-label text-slate-300">Click the corners in order around the rectangle, not across it</span>
+      </>)}
       {needed > 1 && <span className="text-label text-slate-300">Point {Math.min(placed + 1, needed)} of {needed}</span>}
       {tool === "select" && !onDelete && <span className="text-label text-slate-300">Click a mark to select it; drag its handles. Drag empty space to pan.</span>}
       {tool === "ballTrack" && <span className="text-label text-slate-300">Click the ball centre: each click steps one frame</span>}

@@ -1,6 +1,9 @@
 import type { View } from "@/lib/marks/types";
 import type { Handedness } from "@/lib/metrics/types";
-import type { Window } from "@/lib/review/readout";
+import type { MeasurementMethod, Window } from "@/lib/review/readout";
+import type { ReviewTracking } from "@/lib/review/tracking";
+
+export type { ReviewTracking };
 
 export type MomentName = "address" | "takeaway" | "top" | "impact" | "finish";
 export type ReviewMoments = Record<MomentName, number | null>;
@@ -21,15 +24,20 @@ export type ReviewClip = {
   suggestedImpactFrame: number | null;
   moments: ReviewMoments;
   windows: Record<string, Window>;
+  /** Optional until every page passes them: tracking is on unless turned off. */
+  trackingEnabled?: boolean;
+  tracking?: ReviewTracking | null;
 };
 
 export type MeasurementEntry = {
   key: string;
   value: number | null;
   unit: string;
+  /** One standard error, same unit; null (or absent, from an older server) when unknown. */
+  uncertainty?: number | null;
   frames?: number[];
   markIds?: string[];
-  method?: string;
+  method?: MeasurementMethod | string;
   needs?: string[];
   window?: Window | null;
 };

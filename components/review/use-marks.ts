@@ -4,7 +4,7 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { apiFetch, ApiClientError } from "@/lib/client/api";
 import { emptyHistory, record, redo, renameMark, undo, type Command, type History } from "@/lib/review/history";
-import { createBody, fieldsOf, patchBody, replaceMark, withoutMark, type MarkFields, type ReviewMark } from "@/lib/review/marks";
+import { createBody, fieldsOf, movedByHand, patchBody, replaceMark, withoutMark, type MarkFields, type ReviewMark } from "@/lib/review/marks";
 import type { MarkDraft } from "@/lib/review/tools";
 import { measurementsKey, showMeasurements } from "./measurements-cache";
 import type { MeasurementsReply } from "./types";
@@ -116,7 +116,7 @@ export function useMarks(clipId: string) {
   const update = (id: string, fields: Partial<MarkFields>) => {
     const before = marksRef.current.find((m) => m.id === id);
     if (!before) return;
-    setMarks(replaceMark(marksRef.current, { ...before, ...fields })); // shown at once, saved in turn
+    setMarks(replaceMark(marksRef.current, movedByHand(before, fields))); // shown at once, saved in turn
     enqueue(async () => {
       const saved = await patch(id, fields);
       setHistory(record(historyRef.current, { type: "update", id, before: fieldsOf(before), after: fieldsOf(saved) }));
@@ -147,6 +147,8 @@ export function useMarks(clipId: string) {
     notice,
     dismissNotice: () => setNotice(null),
     report: (text: string) => setNotice({ tone: "error", text }),
+    /** After a change made elsewhere (tracking accepted or run again): the server's marks, queued behind pending saves. */
+    reload: () => enqueue(reload),
     create,
     update,
     destroy,

@@ -21,5 +21,5 @@ export function useMoments(clipId: string, initial: ReviewMoments, onError: (tex
       onError(`Could not set ${name}: ${err instanceof Error ? err.message : String(err)}`);
     }
   };
-  return { moments, setMoment };
+  return { moments, setMoment, replaceMoments: setMoments };
 }

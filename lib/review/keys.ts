@@ -13,6 +13,7 @@ export type KeyCommand =
   | { type: "delete" }
   | { type: "cancel" }
   | { type: "tool"; tool: Tool }
+  | { type: "acceptProposals" }
   | { type: "help" };
 
 export type KeyPress = { key: string; shiftKey: boolean; ctrlKey: boolean; metaKey: boolean; altKey: boolean };
@@ -41,6 +42,7 @@ export function commandForKey(e: KeyPress): KeyCommand | null {
     case "0": return { type: "zoom", by: "fit" };
     case "Delete": case "Backspace": return { type: "delete" };
     case "Escape": return { type: "cancel" };
+    case "t": return { type: "acceptProposals" };
     case "?": return { type: "help" };
   }
   const tool = TOOL_KEYS[key];
@@ -59,6 +61,7 @@ export const KEY_HELP: readonly { keys: string; does: string }[] = [
   { keys: "Space + drag", does: "Pan (or drag empty space with Select)" },
   { keys: "1 … 7", does: "Select, line, point, angle, ball track, scale, ground plane" },
   { keys: "Delete / Backspace", does: "Delete the selected mark" },
+  { keys: "T", does: "Accept the tracked marks and the tracker's address and impact" },
   { keys: "Esc", does: "Drop the points placed so far, or clear the selection" },
   { keys: "Ctrl/⌘ + Z", does: "Undo" },
   { keys: "Shift + Ctrl/⌘ + Z, Ctrl + Y", does: "Redo" },

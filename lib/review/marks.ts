@@ -1,6 +1,6 @@
 // The review screen's document: marks as plain data, exactly as the API stores them.
 import type { Vec2 } from "@/lib/geometry/vector";
-import type { MarkKind, MarkRole } from "@/lib/marks/types";
+import type { MarkKind, MarkRole, MarkSource } from "@/lib/marks/types";
 
 export type ReviewMark = {
   id: string;
@@ -12,6 +12,10 @@ export type ReviewMark = {
   widthMm?: number | null;
   heightMm?: number | null;
   authorUserId?: string | null;
+  /** Absent on marks from before tracking: those are hand marks. */
+  source?: MarkSource;
+  /** One standard deviation of each point, px; null or absent = the stated hand-click default. */
+  precisionPx?: number | null;
   version: number;
 };
 
@@ -49,3 +53,13 @@ export const withoutMark = (marks: readonly ReviewMark[], id: string): ReviewMar
 /** Points of a mark with one handle moved. */
 export const moveHandle = (points: readonly Vec2[], index: number, to: Vec2): Vec2[] =>
   points.map((p, i) => (i === index ? ([Math.round(to[0] * 100) / 100, Math.round(to[1] * 100) / 100] as Vec2) : p));
+
+/**
+ * A proposal is drawn quieter (hollow, dashed, lower opacity) until the fitter accepts the clip's
+ * tracking; a hand mark, or one the fitter moved (the server makes it a hand mark), is solid.
+ */
+export const isProposal = (m: Pick<ReviewMark, "source">, acceptedAt: string | null | undefined): boolean => m.source === "tracked" && !acceptedAt;
+
+/** The mark as shown while its moved points are saved: moving a proposal makes it the fitter's own. */
+export const movedByHand = (m: ReviewMark, fields: Partial<MarkFields>): ReviewMark =>
+  fields.points && m.source === "tracked" ? { ...m, ...fields, source: "hand", precisionPx: null } : { ...m, ...fields };

@@ -66,3 +66,23 @@ export function press(s: ToolState, p: Vec2, frame: number, options: ToolOptions
 
 /** Escape: drop the points placed so far. */
 export const cancel = (s: ToolState): ToolState => idle(s.tool);
+
+/** A label on the overlay: image point and text. */
+export type SideLabel = { at: Vec2; text: string };
+
+/**
+ * While a ground plane is drawn (corners in order around the rectangle), the sides it has so far
+ * are named: corner 1 → 2 is the width, 2 → 3 the height, each with the length it will be given.
+ */
+export function planeSideLabels(corners: readonly Vec2[], options: Pick<ToolOptions, "widthMm" | "heightMm">): SideLabel[] {
+  const sides = [
+    { from: 0, to: 1, text: `width ${options.widthMm} mm` },
+    { from: 1, to: 2, text: `height ${options.heightMm} mm` },
+  ];
+  return sides
+    .filter((s) => corners.length > s.to)
+    .map((s) => {
+      const a = corners[s.from]!, b = corners[s.to]!;
+      return { at: [(a[0] + b[0]) / 2, (a[1] + b[1]) / 2] as Vec2, text: s.text };
+    });
+}

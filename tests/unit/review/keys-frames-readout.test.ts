@@ -29,6 +29,7 @@ describe("keyboard", () => {
     expect(commandForKey(key("Delete"))).toEqual({ type: "delete" });
     expect(commandForKey(key("2"))).toEqual({ type: "tool", tool: "line" });
     expect(commandForKey(key("q"))).toBeNull();
+    expect(commandForKey(key("t"))).toEqual({ type: "acceptProposals" });
   });
 });
 

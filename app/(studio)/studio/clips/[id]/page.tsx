@@ -38,6 +38,8 @@ export default async function ClipReviewPage({ params }: { params: Promise<{ id:
     suggestedImpactFrame: clip.suggestedImpactFrame,
     moments: { address: clip.addressFrame, takeaway: clip.takeawayFrame, top: clip.topFrame, impact: clip.impactFrame, finish: clip.finishFrame },
     windows: settings.windows ?? {},
+    trackingEnabled: clip.trackingEnabled,
+    tracking: (clip.tracking as ReviewClip["tracking"]) ?? null,
   };
   return <ReviewLoader clip={data} />;
 }
