@@ -1,14 +1,16 @@
 "use client";
-// Adds a build to the fitting. Units: length in inches to 0.25, lie and loft in degrees to 0.5, masses in grams.
+// Adds a build to the fitting. Units: length in inches to 0.25, lie, loft and designed shaft lean in degrees
+// to 0.5, grip width and gap in inches to 0.01, masses in grams. The two-grip fields show only for two grips.
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm, type FieldPath } from "react-hook-form";
+import { useForm, useWatch, type FieldPath } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
 import { ApiClientError, apiFetch } from "@/lib/client/api";
 import { buildFieldsSchema } from "@/lib/schemas/fitting";
-import { asOptionalNumber, FormField } from "@/components/golfers/form-field";
-import { BUILD_FIELDS, isNumericField } from "./build-fields";
+import { FormField } from "@/components/golfers/form-field";
+import { fieldsForGrips, fieldValue, isNumericField } from "./build-fields";
+import { ChoiceField } from "./choice-field";
 
 type Input = z.input<typeof buildFieldsSchema>;
 type Output = z.output<typeof buildFieldsSchema>;
@@ -16,7 +18,7 @@ type Output = z.output<typeof buildFieldsSchema>;
 export function BuildForm({ fittingId, first }: { fittingId: string; first: boolean }) {
   const router = useRouter();
   const [status, setStatus] = useState<string | null>(null);
-  const { register, handleSubmit, setError, reset, formState } = useForm<Input, unknown, Output>({
+  const { register, handleSubmit, setError, reset, control, formState } = useForm<Input, unknown, Output>({
     resolver: zodResolver(buildFieldsSchema),
     defaultValues: { label: first ? "Own putter" : "", isBaseline: first },
   });
@@ -32,22 +34,31 @@ export function BuildForm({ fittingId, first }: { fittingId: string; first: bool
       setStatus(e instanceof Error ? `Not added: ${e.message}` : "Not added.");
     }
   });
+  const gripCount = Number(useWatch({ control, name: "gripCount" }) ?? 1);
   const err = (k: string) => (formState.errors as Record<string, { message?: string } | undefined>)[k]?.message;
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
       <div className="grid gap-3 sm:grid-cols-3 lg:grid-cols-5">
         <FormField id="build-label" label="Name of the build" error={err("label")} {...register("label")} />
-        {BUILD_FIELDS.map((f) => (
-          <FormField
-            key={f.key}
-            id={`build-${f.key}`}
-            label={f.unit ? `${f.label} (${f.unit})` : f.label}
-            type={isNumericField(f) ? "number" : "text"}
-            step={f.step}
-            error={err(f.key)}
-            {...register(f.key, isNumericField(f) ? { setValueAs: (v) => asOptionalNumber(v) ?? null } : {})}
-          />
-        ))}
+        {fieldsForGrips(gripCount).map((f) => {
+          const label = f.unit ? `${f.label} (${f.unit})` : f.label;
+          // Two-grip fields leave the form's values when they are hidden, so a gap never goes with one grip.
+          const options = { shouldUnregister: f.twoGripsOnly, setValueAs: (v: unknown) => (f.choices || isNumericField(f) ? fieldValue(f, typeof v === "string" ? v : String(v ?? "")) : v) };
+          return f.choices ? (
+            <ChoiceField key={f.key} id={`build-${f.key}`} label={label} options={f.choices} error={err(f.key)} {...register(f.key, options)} />
+          ) : (
+            <FormField
+              key={f.key}
+              id={`build-${f.key}`}
+              label={label}
+              type={isNumericField(f) ? "number" : "text"}
+              step={f.step}
+              hint={f.hint}
+              error={err(f.key)}
+              {...register(f.key, options)}
+            />
+          );
+        })}
       </div>
       <label className="flex min-h-touch items-center gap-2"><input type="checkbox" {...register("isBaseline")} /> The golfer&apos;s own putter (baseline)</label>
       <div className="flex items-center gap-4">

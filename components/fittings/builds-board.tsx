@@ -1,13 +1,12 @@
 // The fitting's builds side by side: their numbers, equipment-rule warnings and swing weight.
 import type { BuildChecks } from "@/lib/compare/build-checks";
 import { RULES_OF_THUMB, swingWeightChange, type BuildMasses } from "@/lib/compare/swing-weight";
-import { BUILD_FIELDS } from "./build-fields";
+import { fieldsForGrips, fieldText } from "./build-fields";
 import { DuplicateBuild } from "./duplicate-build";
 
 type Build = BuildMasses & BuildChecks & Record<string, unknown> & { id: string; label: string; isBaseline: boolean; clipCount: number };
 
 const points = (p: number) => `${p > 0 ? "+" : p < 0 ? "−" : ""}${Math.abs(p).toFixed(1)}`;
-const show = (v: unknown, unit?: string) => (v === null || v === undefined || v === "" ? "—" : `${v}${unit ? (unit === "°" ? "°" : ` ${unit}`) : ""}`);
 
 export function BuildsBoard({ builds, canEdit }: { builds: Build[]; canEdit: boolean }) {
   if (builds.length === 0) return <p className="text-slate-600">No builds yet: add the golfer&apos;s own putter first.</p>;
@@ -24,16 +23,16 @@ export function BuildsBoard({ builds, canEdit }: { builds: Build[]; canEdit: boo
                 <p className="text-label text-slate-600">{b.isBaseline ? "baseline · " : ""}<span className="num">{b.clipCount}</span> clips</p>
               </header>
               <dl className="grid grid-cols-2 gap-x-3 gap-y-1 text-label">
-                {BUILD_FIELDS.map((f) => (
+                {fieldsForGrips(b.gripCount).map((f) => (
                   <div key={f.key} className="contents">
                     <dt className="text-slate-600">{f.label}</dt>
-                    <dd className="num text-right">{show(b[f.key], f.unit)}</dd>
+                    <dd className="num text-right">{fieldText(f, b[f.key])}</dd>
                   </div>
                 ))}
               </dl>
               {b.warnings.length > 0 && (
                 <ul className="flex flex-col gap-1 rounded-card border border-signal-dark bg-signal-light p-2 text-label" aria-label="Equipment rules">
-                  {b.warnings.map((w) => <li key={w.field}><strong>{w.message}</strong> <span className="text-slate-700">({w.rule})</span></li>)}
+                  {b.warnings.map((w) => <li key={w.rule}><strong>{w.message}</strong> <span className="text-slate-700">({w.rule})</span></li>)}
                 </ul>
               )}
               <div className="text-label">

@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { apiFetch } from "@/lib/client/api";
-import { BUILD_FIELDS, isNumericField } from "./build-fields";
+import { BUILD_FIELDS, fieldValue, isNumericField } from "./build-fields";
 
 export function DuplicateBuild({ buildId, label }: { buildId: string; label: string }) {
   const router = useRouter();
@@ -18,11 +18,12 @@ export function DuplicateBuild({ buildId, label }: { buildId: string; label: str
       onSubmit={async (e) => {
         e.preventDefault();
         setError(null);
-        const parsed = isNumericField(info) ? (value === "" ? null : Number(value)) : value;
+        const parsed = fieldValue(info, value);
+        const shown = info.choices ? info.choices.find((c) => c.value === value)?.label.toLowerCase() ?? "" : `${value}${info.unit ?? ""}`;
         try {
           await apiFetch(`/api/builds/${buildId}/duplicate`, {
             method: "POST",
-            body: { label: `${label} · ${info.label.toLowerCase()} ${value}${info.unit ?? ""}`.slice(0, 100), change: { [field]: parsed } },
+            body: { label: `${label} · ${info.label.toLowerCase()} ${shown}`.slice(0, 100), change: { [field]: parsed } },
           });
           setValue("");
           router.refresh();
@@ -33,10 +34,16 @@ export function DuplicateBuild({ buildId, label }: { buildId: string; label: str
     >
       <span className="field-label">Copy with one change</span>
       <div className="flex gap-2">
-        <select aria-label="What changes" className="field" value={field} onChange={(e) => setField(e.target.value)}>
+        <select aria-label="What changes" className="field" value={field} onChange={(e) => { setField(e.target.value); setValue(""); }}>
           {BUILD_FIELDS.map((f) => <option key={f.key} value={f.key}>{f.label}</option>)}
         </select>
-        <input id={id} aria-label={`New ${info.label.toLowerCase()}${info.unit ? ` (${info.unit})` : ""}`} className="field w-28" type={isNumericField(info) ? "number" : "text"} step={info.step} value={value} onChange={(e) => setValue(e.target.value)} aria-describedby={error ? `${id}-error` : undefined} />
+        {info.choices ? (
+          <select id={id} aria-label={`New ${info.label.toLowerCase()}`} className="field w-28" value={value} onChange={(e) => setValue(e.target.value)} aria-describedby={error ? `${id}-error` : undefined}>
+            {[{ value: "", label: "Choose" }, ...info.choices.filter((c) => c.value !== "")].map((c) => <option key={c.value} value={c.value}>{c.label}</option>)}
+          </select>
+        ) : (
+          <input id={id} aria-label={`New ${info.label.toLowerCase()}${info.unit ? ` (${info.unit})` : ""}`} className="field w-28" type={isNumericField(info) ? "number" : "text"} step={info.step} value={value} onChange={(e) => setValue(e.target.value)} aria-describedby={error ? `${id}-error` : undefined} />
+        )}
       </div>
       <button type="submit" className="btn-quiet">Copy build</button>
       {error && <p id={`${id}-error`} role="alert" className="field-error">{error}</p>}

@@ -6,6 +6,8 @@ export type SpecBuild = {
   label: string; headModel: string; neckStyle: string; lengthIn: number | null; lieDeg: number | null; loftDeg: number | null;
   offsetIn: number | null; toeHang: string; headMassG: number | null; gripName: string; gripMassG: number | null;
   shaftMassG: number | null; balancePointIn: number | null; alignmentAid: string; notes: string;
+  // Absent in specs issued before the equipment-rule fields were recorded.
+  designShaftLeanDeg?: number | null; gripMaxWidthIn?: number | null; gripCount?: number; gripsCircular?: boolean | null; gripGapIn?: number | null;
 };
 
 export type BuildShop = {
@@ -75,7 +77,10 @@ export function freezeSpec(input: FreezeInput): SpecData {
     }),
     makeChances: (input.comparison?.make ?? []).map((m) => ({ distanceFt: m.distanceFt, probability: m.probability })),
     notes: input.notes,
-    warnings: equipmentWarnings({ lengthIn: buildShop.lengthIn, lieDeg: buildShop.lieDeg, loftDeg: buildShop.loftDeg }),
+    warnings: equipmentWarnings({
+      lengthIn: buildShop.lengthIn, lieDeg: buildShop.lieDeg, loftDeg: buildShop.loftDeg, designShaftLeanDeg: b.designShaftLeanDeg,
+      gripMaxWidthIn: b.gripMaxWidthIn, gripCount: b.gripCount, gripsCircular: b.gripsCircular, gripGapIn: b.gripGapIn,
+    }),
   };
   return structuredClone(data);
 }

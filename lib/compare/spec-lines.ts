@@ -8,6 +8,20 @@ const text = (v: string) => (v.trim() === "" ? "—" : v);
 const valueOf = (v: number, unit: string) => (unit === "deg" ? signedDeg(v) : `${v.toFixed(2)} ${unit}`);
 const spreadOf = (v: number, unit: string) => (unit === "deg" ? `${v.toFixed(1)}°` : `${v.toFixed(2)} ${unit}`);
 
+const leanText = (deg: number) => (deg === 0 ? "0°" : `${Number(Math.abs(deg).toFixed(1))}° ${deg > 0 ? "forward" : "back"}`);
+
+/** The build's equipment-rule fields, only those recorded (older specs have none). */
+function ruleRows(b: SpecData["build"]): [string, string][] {
+  const rows: [string, string][] = [];
+  if (b.designShaftLeanDeg != null) rows.push(["Designed shaft lean", leanText(b.designShaftLeanDeg)]);
+  if (b.gripMaxWidthIn != null) rows.push(["Grip width (largest cross-section)", num(b.gripMaxWidthIn, " in")]);
+  if (b.gripCount === 2) {
+    const shape = b.gripsCircular == null ? "shape not recorded" : b.gripsCircular ? "both round" : "not round";
+    rows.push(["Grips", `two, ${b.gripGapIn == null ? "gap not recorded" : `${num(b.gripGapIn, " in")} apart`}, ${shape}`]);
+  }
+  return rows;
+}
+
 /** The spec as labelled lines, shared by the printable page, the PDF and the e-mail. */
 export function specLines(spec: SpecData) {
   const s = spec.buildShop;
@@ -16,7 +30,7 @@ export function specLines(spec: SpecData) {
       title: "Build shop",
       rows: [
         ["Head", text(s.head)], ["Neck", text(s.neck)], ["Length", num(s.lengthIn, " in")], ["Lie", num(s.lieDeg, "°", 1)],
-        ["Loft", num(s.loftDeg, "°", 1)], ["Grip", text(s.grip)], ["Grip orientation", text(s.gripOrientation)],
+        ["Loft", num(s.loftDeg, "°", 1)], ...ruleRows(spec.build), ["Grip", text(s.grip)], ["Grip orientation", text(s.gripOrientation)],
         ["Head mass", num(s.headMassG, " g", 1)], ["Swing weight", text(s.swingWeight)], ["Finish notes", text(s.finishNotes)],
       ],
     },

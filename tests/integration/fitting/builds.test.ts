@@ -35,6 +35,43 @@ describe("equipment-rule warnings at the limits (Equipment Rules 2019, Part 2)",
   });
 });
 
+describe("shaft-lean and grip warnings at the limits (Equipment Rules 2019, Part 2, 1d(ii), 3b(iii), 3c)", () => {
+  it("designed shaft lean: 20.0° forward passes, 20.5° warns; 10.0° back passes, 10.5° warns (1d(ii))", async () => {
+    expect(fields(await post({ designShaftLeanDeg: 20 }))).toEqual([]);
+    const forward = await post({ designShaftLeanDeg: 20.5 });
+    expect(forward.status).toBe(201);
+    expect(forward.body.designShaftLeanDeg).toBe(20.5);
+    expect(forward.body.warnings).toEqual([expect.objectContaining({ field: "designShaftLeanDeg", rule: expect.stringContaining("1d(ii)") })]);
+    expect(fields(await post({ designShaftLeanDeg: -10 }))).toEqual([]);
+    expect(fields(await post({ designShaftLeanDeg: -10.5 }))).toEqual(["designShaftLeanDeg"]);
+  });
+  it("grip width: 1.75 in passes, 1.76 in warns (3b(iii))", async () => {
+    expect(fields(await post({ gripMaxWidthIn: 1.75 }))).toEqual([]);
+    expect(fields(await post({ gripMaxWidthIn: 1.76 }))).toEqual(["gripMaxWidthIn"]);
+  });
+  it("two grips: round and 1.5 in apart pass, 1.4 in apart warns, not round warns (3c)", async () => {
+    const ok = await post({ gripCount: 2, gripsCircular: true, gripGapIn: 1.5 });
+    expect(ok.body).toMatchObject({ gripCount: 2, gripsCircular: true, gripGapIn: 1.5, warnings: [] });
+    expect(fields(await post({ gripCount: 2, gripsCircular: true, gripGapIn: 1.4 }))).toEqual(["gripGapIn"]);
+    expect(fields(await post({ gripCount: 2, gripsCircular: false, gripGapIn: 2 }))).toEqual(["gripsCircular"]);
+  });
+  it("a new build has one grip; a gap without two grips and a third grip are refused with the field named", async () => {
+    expect((await post({})).body).toMatchObject({ gripCount: 1, gripsCircular: null, gripGapIn: null, gripMaxWidthIn: null, designShaftLeanDeg: null });
+    const gap = await post({ gripGapIn: 2 });
+    expect(gap.status).toBe(400);
+    expect(gap.body.error.issues).toEqual([expect.objectContaining({ path: "gripGapIn", message: expect.stringContaining("two grips") })]);
+    const three = await post({ gripCount: 3 });
+    expect(three.status).toBe(400);
+    expect(three.body.error.issues.map((i: { path: string }) => i.path)).toEqual(["gripCount"]);
+  });
+  it("a change to the lean recomputes the warnings in the answer", async () => {
+    const b = await post({ designShaftLeanDeg: 0 });
+    const patched = await call(fitter, "PATCH", `/api/builds/${b.body.id}`, { designShaftLeanDeg: -12 });
+    expect(patched.status).toBe(200);
+    expect(patched.body.warnings.map((x: { field: string }) => x.field)).toEqual(["designShaftLeanDeg"]);
+  });
+});
+
 describe("units and steps", () => {
   it("length in steps of 0.25 in, lie and loft in steps of 0.5°", async () => {
     const bad = await post({ lengthIn: 34.1, loftDeg: 3.2 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { csvText, measurementsCsv, MEASUREMENT_CSV_HEADER } from "@/lib/compare/csv";
 import { freezeSpec, type SpecBuild } from "@/lib/compare/spec-data";
+import { specLines } from "@/lib/compare/spec-lines";
 
 describe("measurements CSV (RFC 4180)", () => {
   const row = { fittingId: "f1", buildPosition: 1, buildLabel: 'Blade, "heavy"', clipId: "c1", view: "overhead", clipCreatedAt: new Date("2026-01-01T10:00:00Z"), key: "face_angle_impact", value: -0.75, unit: "deg", method: "derived" };
@@ -43,5 +44,16 @@ describe("freezing a spec", () => {
   it("carries the equipment-rule warnings of the issued numbers (Equipment Rules, Part 2: loft at most 10°)", () => {
     expect(freezeSpec({ ...input, buildShop: { loftDeg: 10.5 } }).warnings.map((w) => w.field)).toEqual(["loftDeg"]);
     expect(freezeSpec({ ...input, buildShop: { loftDeg: 10 } }).warnings).toEqual([]);
+  });
+  it("carries the build's shaft-lean and grip warnings (Equipment Rules, Part 2, 1d(ii) and 3c) and prints those fields", () => {
+    const twoGrips = { ...build, designShaftLeanDeg: -10.5, gripMaxWidthIn: 1.5, gripCount: 2, gripsCircular: true, gripGapIn: 1.4 };
+    const spec = freezeSpec({ ...input, build: twoGrips, buildShop: {} });
+    expect(spec.warnings.map((w) => w.field)).toEqual(["designShaftLeanDeg", "gripGapIn"]);
+    const shop = specLines(spec).sections.find((x) => x.title === "Build shop")!.rows;
+    expect(shop).toEqual(expect.arrayContaining([["Designed shaft lean", "10.5° back"], ["Grip width (largest cross-section)", "1.5 in"], ["Grips", "two, 1.4 in apart, both round"]]));
+  });
+  it("a spec issued before the grip fields existed prints no rows for them", () => {
+    const shop = specLines(freezeSpec(input)).sections.find((x) => x.title === "Build shop")!.rows.map(([label]) => label);
+    expect(shop).toEqual(["Head", "Neck", "Length", "Lie", "Loft", "Grip", "Grip orientation", "Head mass", "Swing weight", "Finish notes"]);
   });
 });
