@@ -1,4 +1,4 @@
-// The clip's measurements as a short list of plain sentences with the studio's windows.
+// The clip's measurements as a short list of plain sentences with their ± and the studio's windows.
 import { measurementSentence, type PhoneMeasurement } from "@/lib/playback/measurement-words";
 import type { Handedness } from "@/lib/metrics/types";
 import type { View } from "@/lib/marks/types";
@@ -11,8 +11,15 @@ export function MeasurementList({ measurements, view, handedness }: { measuremen
       {measured.length === 0 ? <p className="text-slate-600">Nothing measured on this clip yet.</p> : (
         <ul className="flex flex-col gap-2" data-testid="measurements">
           {measured.map((m) => {
-            const { label, text } = measurementSentence(m, view, handedness);
-            return <li key={m.key}><span className="font-medium">{label}:</span> <span className="num">{text}</span></li>;
+            const s = measurementSentence(m, view, handedness);
+            return (
+              <li key={m.key}>
+                <span className="font-medium">{s.label}:</span>{" "}
+                <span className="num">{s.value}</span>
+                {s.uncertainty && <> <span className="num font-light text-slate-600" data-testid="uncertainty">{s.uncertainty}</span></>}
+                {s.rest && <> {s.rest}</>}
+              </li>
+            );
           })}
         </ul>
       )}

@@ -1,28 +1,30 @@
-// A measurement as one plain sentence for the golfer: "Face angle at impact: 0.6° closed — in window (±1.0°)".
+// A measurement as one plain sentence for the golfer:
+// "Face angle at impact: 0.6° ±0.3° closed — in window (−1° to +1°)". The ± is the number's
+// precision (one standard error); a window is always a range, so ± never means a window.
 import { formatMeasurement } from "@/lib/metrics/display";
 import { METRICS_BY_VIEW, signWordsFor } from "@/lib/metrics/keys";
 import type { Handedness } from "@/lib/metrics/types";
 import type { View } from "@/lib/marks/types";
-import { standing, type Window } from "@/lib/review/readout";
+import { standing, uncertaintyText, unitText, windowText, type Window } from "@/lib/review/readout";
 
-export type PhoneMeasurement = { key: string; value: number | null; unit: string; window?: Window };
+export type PhoneMeasurement = { key: string; value: number | null; unit: string; uncertainty?: number | null; window?: Window };
 
-const UNIT: Record<string, string> = { deg: "°", "deg/s": "°/s", "m/s": " m/s", rpm: " rpm", ratio: "", m: " m", mm: " mm" };
-const withUnit = (v: number, unit: string) => `${formatMeasurement(v, unit)}${UNIT[unit] ?? ` ${unit}`}`;
+/** The sentence in parts, so the page can set the ± in a lighter weight; `text` is all of it. */
+export type MeasurementSentence = { label: string; value: string; uncertainty: string; rest: string; text: string };
 
-function windowWords(w: Window, unit: string): string {
-  if (Math.abs(w.min + w.max) < 1e-9) return `±${withUnit(w.max, unit)}`;
-  const signed = (v: number) => (v > 0 ? `+${withUnit(v, unit)}` : withUnit(v, unit));
-  return `${signed(w.min)} to ${signed(w.max)}`;
-}
-
-export function measurementSentence(m: PhoneMeasurement, view: View, handedness: Handedness): { label: string; text: string } {
+export function measurementSentence(m: PhoneMeasurement, view: View, handedness: Handedness): MeasurementSentence {
   const label = METRICS_BY_VIEW[view].find((d) => d.key === m.key)?.label ?? m.key;
-  if (m.value === null) return { label, text: "not measured on this clip" };
+  if (m.value === null) {
+    const rest = "not measured on this clip";
+    return { label, value: "", uncertainty: "", rest, text: rest };
+  }
   const words = signWordsFor(view, m.key, handedness);
   const shown = Number(formatMeasurement(m.value, m.unit));
   const side = words && shown !== 0 ? ` ${shown > 0 ? words.positive : words.negative}` : "";
-  const value = words ? withUnit(Math.abs(m.value), m.unit) : withUnit(m.value, m.unit);
-  const against = m.window ? ` — ${standing(m.value, m.window)} (${windowWords(m.window, m.unit)})` : "";
-  return { label, text: `${value}${side}${against}` };
+  // The side word carries the sign, so the number is shown without one.
+  const value = `${formatMeasurement(words ? Math.abs(m.value) : m.value, m.unit)}${unitText(m.unit)}`;
+  const uncertainty = uncertaintyText(m.uncertainty, m.unit);
+  const against = m.window ? ` — ${standing(m.value, m.window, m.uncertainty)} (${windowText(m.window, m.unit, words !== null)})` : "";
+  const rest = `${side}${against}`.trimStart();
+  return { label, value, uncertainty, rest, text: [value, uncertainty, rest].filter(Boolean).join(" ") };
 }
