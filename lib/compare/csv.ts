@@ -9,11 +9,13 @@ export type MeasurementCsvRow = {
   clipCreatedAt: Date;
   key: string;
   value: number | null;
+  /** One standard error, same unit; absent or null when not known (rows from before tracking). */
+  uncertainty?: number | null;
   unit: string;
   method: string;
 };
 
-export const MEASUREMENT_CSV_HEADER = ["fitting_id", "build_position", "build_label", "clip_id", "view", "clip_recorded_at", "key", "value", "unit", "method"];
+export const MEASUREMENT_CSV_HEADER = ["fitting_id", "build_position", "build_label", "clip_id", "view", "clip_recorded_at", "key", "value", "uncertainty", "unit", "method"];
 
 /** A text cell; one that a spreadsheet would run as a formula gets a leading apostrophe (OWASP CSV injection). */
 export function csvText(value: string): string {
@@ -23,14 +25,14 @@ export function csvText(value: string): string {
 
 const csvNumber = (value: number | null) => (value === null || !Number.isFinite(value) ? "" : String(value));
 
-/** One row per clip per measurement; an empty value where the measurement could not be computed. */
+/** One row per clip per measurement; an empty value (or uncertainty) where it could not be computed. */
 export function measurementsCsv(rows: readonly MeasurementCsvRow[]): string {
   const lines = [MEASUREMENT_CSV_HEADER.join(",")];
   for (const r of rows) {
     lines.push(
       [
         r.fittingId, String(r.buildPosition), csvText(r.buildLabel), r.clipId, r.view, r.clipCreatedAt.toISOString(),
-        csvText(r.key), csvNumber(r.value), csvText(r.unit), r.method,
+        csvText(r.key), csvNumber(r.value), csvNumber(r.uncertainty ?? null), csvText(r.unit), r.method,
       ].join(","),
     );
   }

@@ -32,13 +32,13 @@ describe("GET /api/fittings/{id}/csv", () => {
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("text/csv; charset=utf-8");
     const lines = (res.body as string).trimEnd().split("\r\n");
-    expect(lines[0]).toBe("fitting_id,build_position,build_label,clip_id,view,clip_recorded_at,key,value,unit,method");
+    expect(lines[0]).toBe("fitting_id,build_position,build_label,clip_id,view,clip_recorded_at,key,value,uncertainty,unit,method");
     const f = w.own.fitting.id;
     expect(lines.slice(1)).toEqual([
-      `${f},1,Baseline,${clips[0]!.id},overhead,2026-01-01T10:00:00.000Z,face_angle_impact,-0.5,deg,derived`,
-      `${f},1,Baseline,${clips[0]!.id},overhead,2026-01-01T10:00:00.000Z,path,,deg,derived`,
-      `${f},1,Baseline,${clips[1]!.id},overhead,2026-01-01T10:01:00.000Z,face_angle_impact,1.25,deg,derived`,
-      `${f},2,"Blade, heavy",${clips[2]!.id},overhead,2026-01-01T11:00:00.000Z,start_direction,0.75,deg,derived`,
+      `${f},1,Baseline,${clips[0]!.id},overhead,2026-01-01T10:00:00.000Z,face_angle_impact,-0.5,,deg,derived`,
+      `${f},1,Baseline,${clips[0]!.id},overhead,2026-01-01T10:00:00.000Z,path,,,deg,derived`,
+      `${f},1,Baseline,${clips[1]!.id},overhead,2026-01-01T10:01:00.000Z,face_angle_impact,1.25,,deg,derived`,
+      `${f},2,"Blade, heavy",${clips[2]!.id},overhead,2026-01-01T11:00:00.000Z,start_direction,0.75,,deg,derived`,
     ]);
   });
 });

@@ -8,11 +8,16 @@ describe("measurements CSV (RFC 4180)", () => {
   it("one line per measurement, quoted where needed, CRLF line ends, empty for a value not computed", () => {
     const text = measurementsCsv([row, { ...row, key: "path", value: null }]);
     expect(text.split("\r\n")).toEqual([
-      MEASUREMENT_CSV_HEADER.join(","),
-      'f1,1,"Blade, ""heavy""",c1,overhead,2026-01-01T10:00:00.000Z,face_angle_impact,-0.75,deg,derived',
-      "f1,1,\"Blade, \"\"heavy\"\"\",c1,overhead,2026-01-01T10:00:00.000Z,path,,deg,derived",
+      "fitting_id,build_position,build_label,clip_id,view,clip_recorded_at,key,value,uncertainty,unit,method",
+      'f1,1,"Blade, ""heavy""",c1,overhead,2026-01-01T10:00:00.000Z,face_angle_impact,-0.75,,deg,derived',
+      "f1,1,\"Blade, \"\"heavy\"\"\",c1,overhead,2026-01-01T10:00:00.000Z,path,,,deg,derived",
       "",
     ]);
+    expect(MEASUREMENT_CSV_HEADER.join(",")).toBe("fitting_id,build_position,build_label,clip_id,view,clip_recorded_at,key,value,uncertainty,unit,method");
+  });
+  it("the uncertainty (one standard error) sits right after the value, at full precision", () => {
+    const line = measurementsCsv([{ ...row, value: 1.4, uncertainty: 0.3125, method: "tracked" }]).split("\r\n")[1];
+    expect(line).toBe('f1,1,"Blade, ""heavy""",c1,overhead,2026-01-01T10:00:00.000Z,face_angle_impact,1.4,0.3125,deg,tracked');
   });
   it("a text cell that would run as a spreadsheet formula is defused (OWASP CSV injection)", () => {
     expect(csvText("=HYPERLINK(1)")).toBe("'=HYPERLINK(1)");
