@@ -1,5 +1,7 @@
 // Per measurement and per build: n, mean, sd, median, range and the share inside the studio's window.
 import { formatMeasurement } from "@/lib/metrics/display";
+import { metricDefinition } from "@/lib/compare/metric-labels";
+import { windowText } from "@/lib/review/readout";
 import type { ComparisonReply } from "./types";
 
 const unitText = (u: string) => (u === "deg" ? "°" : u === "ratio" ? "" : ` ${u}`);
@@ -24,7 +26,7 @@ export function StatsTable({ data }: { data: ComparisonReply }) {
               const f = (v: number | null) => (v === null ? "—" : `${formatMeasurement(v, k.unit)}${unitText(k.unit)}`);
               return (
                 <tr key={`${k.key}-${b.buildId}`} className={i === 0 ? "border-t border-chalk-300" : ""}>
-                  <td className="py-1 pr-3">{i === 0 ? <>{k.label}{k.window && <span className="text-slate-600"> (window {k.window.min} to {k.window.max})</span>}</> : ""}</td>
+                  <td className="py-1 pr-3">{i === 0 ? <>{k.label}{k.window && <span className="text-slate-600"> (window {windowText(k.window, k.unit, metricDefinition(k.key).signWords !== null)})</span>}</> : ""}</td>
                   <td className="py-1 pr-3">{b.label}</td>
                   <td className="py-1 pr-3 text-right">{s?.summary.n ?? 0}</td>
                   <td className="py-1 pr-3 text-right">{s ? f(s.summary.mean) : "—"}</td>

@@ -61,7 +61,10 @@ export function SettingsForm({ initial, metrics }: { initial: StudioSettingsInpu
       </fieldset>
       <fieldset>
         <legend className="mb-2 text-title">Measurement windows</legend>
-        <p className="mb-3 text-label text-slate-600">A measurement inside its window reads &ldquo;in window&rdquo;. Leave both ends empty for no window.</p>
+        <p className="mb-3 text-label text-slate-600">
+          A window is a range, from one end to the other. A measurement inside it reads &ldquo;in window&rdquo;; one whose uncertainty (its ±) is
+          wider than half the window reads &ldquo;undecided&rdquo;. Leave both ends empty for no window.
+        </p>
         <table className="num text-left">
           <thead className="text-label uppercase text-slate-600"><tr><th className="pr-4">Measurement</th><th className="pr-4">from</th><th className="pr-4">to</th></tr></thead>
           <tbody>
