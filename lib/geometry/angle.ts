@@ -29,3 +29,26 @@ export function unwrapRadians(angles: readonly number[]): number[] {
   });
   return out;
 }
+
+/** An angle difference in degrees wrapped into (−180°, 180°]. */
+export function wrapDegrees(degrees: number): number {
+  const wrapped = degrees - 360 * Math.floor((degrees + 180) / 360);
+  return wrapped === -180 ? 180 : wrapped;
+}
+
+/**
+ * Unwraps a sequence of angles (radians) sampled at `times` (s), choosing each step's whole
+ * number of turns so that the step is nearest to `expectedRate`·Δt (rad/s): a prior that decides
+ * the branch when samples are so far apart that the turn between them can exceed half a turn.
+ */
+export function unwrapRadiansNear(angles: readonly number[], times: readonly number[], expectedRate: number): number[] {
+  const out: number[] = [];
+  angles.forEach((a, i) => {
+    if (i === 0) return void out.push(a);
+    const raw = a - (angles[i - 1] as number);
+    const expected = expectedRate * ((times[i] as number) - (times[i - 1] as number));
+    const turns = Math.round((expected - raw) / (2 * Math.PI));
+    out.push((out[i - 1] as number) + raw + 2 * Math.PI * turns);
+  });
+  return out;
+}

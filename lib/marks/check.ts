@@ -1,3 +1,4 @@
+import { homographyFromPoints, rectangleCornersMm, type Quad } from "@/lib/geometry/homography";
 import { cross, distance, sub, type Vec2 } from "@/lib/geometry/vector";
 import { roleFits } from "./roles";
 import { POINTS_PER_KIND, type ClipFrameInfo, type MarkInput } from "./types";
@@ -43,10 +44,36 @@ function shapeProblems(mark: MarkInput): string[] {
     case "angle":
       return distance(at(0), at(1)) > 0 && distance(at(2), at(1)) > 0 ? [] : ["An arm of the angle has zero length."];
     case "plane":
-      return planeIsProper(p) ? [] : ["The plane's four points do not form a proper four-sided shape (three lie on one line)."];
+      if (!planeIsProper(p)) return ["The plane's four points do not form a proper four-sided shape (three lie on one line)."];
+      if (!isConvexRing(p)) {
+        return ["The plane's corners must go round the rectangle in order (1 → 2 → 3 → 4, clockwise or anticlockwise); these cross over, as when corners are clicked in Z order."];
+      }
+      if (mark.widthMm !== undefined && mark.heightMm !== undefined && !keepsSideOfHorizon(p, mark.widthMm, mark.heightMm)) {
+        return ["The plane's corners cannot be the image of that rectangle (its ground map passes through infinity between them): check the corners' order and its width (corner 1 → 2) and height (corner 2 → 3)."];
+      }
+      return [];
     default:
       return [];
   }
+}
+
+/**
+ * A convex ring in drawing order: the cross products of consecutive edges all have one sign.
+ * Corners clicked in Z order (1, 2, 4, 3) make a crossed shape whose products change sign.
+ */
+export function isConvexRing(p: readonly Vec2[]): boolean {
+  const signs = p.map((_, i) => {
+    const a = p[i] as Vec2, b = p[(i + 1) % p.length] as Vec2, c = p[(i + 2) % p.length] as Vec2;
+    return Math.sign(cross(sub(b, a), sub(c, b)));
+  });
+  return signs.every((s) => s !== 0 && s === signs[0]);
+}
+
+/** The image → ground map's w keeps one sign over the four corners (the horizon does not cross the shape). */
+function keepsSideOfHorizon(p: readonly Vec2[], widthMm: number, heightMm: number): boolean {
+  const h = homographyFromPoints(p as unknown as Quad, rectangleCornersMm(widthMm, heightMm));
+  const w = p.map(([x, y]) => Math.sign(h[2][0] * x + h[2][1] * y + h[2][2]));
+  return w.every((s) => s !== 0 && s === w[0]);
 }
 
 /** No three of the four corners may be collinear, or the ground-plane map does not exist. */

@@ -2,6 +2,7 @@ import { applyHomography, homographyFromPoints, keepsOrientation, rectangleCorne
 import { mmPerPixel, BALL_DIAMETER_MM } from "@/lib/geometry/scale";
 import type { Vec2 } from "@/lib/geometry/vector";
 import type { StoredMark } from "@/lib/marks/types";
+import { preferred, preferredSet } from "./pick";
 
 /**
  * Where a view's points are measured. With a ground plane (overhead only) points are mapped onto
@@ -18,12 +19,13 @@ export type MeasurementSpace = {
 };
 
 export function measurementSpace(marks: readonly StoredMark[], usePlane: boolean): MeasurementSpace {
-  const plane = usePlane ? marks.filter((m) => m.kind === "plane").at(-1) : undefined;
+  const plane = usePlane ? preferred(marks.filter((m) => m.kind === "plane")) : undefined;
   if (plane && plane.widthMm && plane.heightMm && plane.points.length === 4) {
     return { map: groundMap(plane.points as unknown as Quad, plane.widthMm, plane.heightMm), mmPerUnit: 1, angleMarkIds: [plane.id], lengthMarkIds: [plane.id] };
   }
-  const scales = marks.filter((m) => m.kind === "scale" && m.points.length === 2);
-  // Several scale marks are averaged: each is an independent reading of the same mm/px.
+  // Several scale marks are averaged: each is an independent reading of the same mm/px. A hand
+  // scale overrides the tracker's ball-diameter scale.
+  const scales = preferredSet(marks.filter((m) => m.kind === "scale" && m.points.length === 2));
   const readings = scales.map((s) => mmPerPixel(s.points[0] as Vec2, s.points[1] as Vec2, s.lengthMm ?? BALL_DIAMETER_MM));
   return {
     map: (p) => p,

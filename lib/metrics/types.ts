@@ -25,9 +25,13 @@ export type ClipContext = {
   frictionMu: number;
 };
 
+/** Which marks a value was computed from: hand marks only, the tracker's proposals only, or both. */
+export type MeasurementMethod = "marked" | "tracked" | "mixed";
+
 // Values keep full precision; rounding to 0.1° is for display only, and the API rounds nothing.
+// `uncertainty` is one standard error in the value's unit (null when it could not be estimated).
 export type Measurement =
-  | { key: string; value: number; unit: string; frames: number[]; markIds: string[]; method: "derived" }
+  | { key: string; value: number; uncertainty: number | null; unit: string; frames: number[]; markIds: string[]; method: MeasurementMethod }
   | { key: string; value: null; unit: string; needs: string[] };
 
 export type { StoredMark };

@@ -32,3 +32,72 @@ export function skidToRoll({ speed, spin, mu, radius = BALL_RADIUS_M, gravity = 
   const skidDistance = speed * skidTime + 0.5 * acceleration * skidTime ** 2;
   return { rollSpeed, skidTime, skidDistance };
 }
+
+export type TrackedRoll = {
+  /** Least-squares slope of the ball's distance against time over its tracked frames, m/s. */
+  meanSpeed: number;
+  /** Times of those frames after the impact instant, s. */
+  speedTimes: readonly number[];
+  /** Least-squares slope of the ball's turning against time over the marker frames, rad/s (topspin +). */
+  meanSpin: number;
+  /** Times of the marker frames after the impact instant, s. */
+  spinTimes: readonly number[];
+  mu: number;
+  radius?: number;
+  gravity?: number;
+};
+
+/** Distance travelled and angle turned t seconds after launch, in the sliding-then-rolling model above. */
+function motionAt(speed: number, spin: number, t: number, mu: number, radius: number, gravity: number): { x: number; phi: number } {
+  const slip = speed - radius * spin;
+  const sign = Math.sign(slip);
+  const slideEnd = (2 * Math.abs(slip)) / (7 * mu * gravity);
+  const spinAcceleration = (5 * mu * gravity) / (2 * radius);
+  const ts = Math.min(t, slideEnd);
+  const x = speed * ts - 0.5 * sign * mu * gravity * ts * ts;
+  const phi = spin * ts + 0.5 * sign * spinAcceleration * ts * ts;
+  if (t <= slideEnd) return { x, phi };
+  const rollSpeed = (5 * speed + 2 * radius * spin) / 7;
+  return { x: x + rollSpeed * (t - slideEnd), phi: phi + (rollSpeed / radius) * (t - slideEnd) };
+}
+
+function slope(times: readonly number[], values: readonly number[]): number {
+  const n = times.length;
+  const tm = times.reduce((a, b) => a + b, 0) / n;
+  const vm = values.reduce((a, b) => a + b, 0) / n;
+  let sxy = 0, sxx = 0;
+  times.forEach((t, i) => { sxy += (t - tm) * ((values[i] as number) - vm); sxx += (t - tm) ** 2; });
+  return sxy / sxx;
+}
+
+/**
+ * Speed and spin at the impact instant from the least-squares speed and spin a camera measured
+ * over later frames: the launch state whose sliding-then-rolling motion (skidToRoll's model)
+ * gives the same least-squares slopes over the same frames, found by Newton's method. Null when
+ * the ball was already rolling over all tracked frames (the launch state then cannot be told).
+ */
+export function launchFromTrack({ meanSpeed, speedTimes, meanSpin, spinTimes, mu, radius = BALL_RADIUS_M, gravity = STANDARD_GRAVITY }: TrackedRoll): { speed: number; spin: number } | null {
+  if (!(mu > 0) || speedTimes.length < 2 || spinTimes.length < 2) return null;
+  const predict = (v: number, w: number): [number, number] => [
+    slope(speedTimes, speedTimes.map((t) => motionAt(v, w, t, mu, radius, gravity).x)),
+    slope(spinTimes, spinTimes.map((t) => motionAt(v, w, t, mu, radius, gravity).phi)),
+  ];
+  let [v, w] = [meanSpeed, meanSpin];
+  const scaleV = Math.max(Math.abs(meanSpeed), 1e-3);
+  const scaleW = Math.max(Math.abs(meanSpin), scaleV / radius, 1e-3);
+  for (let i = 0; i < 50; i++) {
+    const [pv, pw] = predict(v, w);
+    const [ev, ew] = [meanSpeed - pv, meanSpin - pw];
+    if (Math.abs(ev) < 1e-12 * scaleV && Math.abs(ew) < 1e-12 * scaleW) return { speed: v, spin: w };
+    const hv = 1e-7 * scaleV, hw = 1e-7 * scaleW;
+    const [av, aw] = predict(v + hv, w);
+    const [bv, bw] = predict(v, w + hw);
+    const j = [[(av - pv) / hv, (bv - pv) / hw], [(aw - pw) / hv, (bw - pw) / hw]] as const;
+    const det = j[0][0] * j[1][1] - j[0][1] * j[1][0];
+    // Rolling throughout: speed and spin move together, and only their rolling speed is seen.
+    if (Math.abs(det) < 1e-6 * Math.abs(j[0][0] * j[1][1]) || !Number.isFinite(det)) return null;
+    v += (j[1][1] * ev - j[0][1] * ew) / det;
+    w += (j[0][0] * ew - j[1][0] * ev) / det;
+  }
+  return { speed: v, spin: w };
+}

@@ -45,7 +45,8 @@ export function clipContext(row: MeasureSubject): ClipContext | null {
 const marksJson = sql<StoredMark[]>`coalesce((
   select json_agg(json_strip_nulls(json_build_object(
     'id', m.id, 'frame', m.frame, 'kind', m.kind, 'role', m.role, 'points', m.points,
-    'lengthMm', m.length_mm, 'widthMm', m.width_mm, 'heightMm', m.height_mm)) order by m.created_at, m.id)
+    'lengthMm', m.length_mm, 'widthMm', m.width_mm, 'heightMm', m.height_mm,
+    'source', m.source, 'precisionPx', m.precision_px)) order by m.created_at, m.id)
   from ${marks} m where m.clip_id = ${clips.id}), '[]'::json)`;
 
 /**
@@ -71,7 +72,7 @@ async function readMeasureInputs(clipId: string) {
 }
 
 // One computation's rows arrive as a single JSON parameter (one per key) and go in with one prepared statement.
-const incoming = sql`jsonb_to_recordset(${sql.placeholder("rows")}::jsonb) as r(key text, value double precision, unit text, frames jsonb, mark_ids jsonb, needs jsonb)`;
+const incoming = sql`jsonb_to_recordset(${sql.placeholder("rows")}::jsonb) as r(key text, value double precision, uncertainty double precision, unit text, frames jsonb, mark_ids jsonb, needs jsonb, method measurement_method)`;
 const excluded = (column: string) => sql.raw(`excluded.${column}`);
 const storeQuery = db
   .insert(measurements)
@@ -83,11 +84,12 @@ const storeQuery = db
         clipId: sql`${sql.placeholder("clipId")}::uuid`.as("clip_id"),
         key: sql`r.key`.as("key"),
         value: sql`r.value`.as("value"),
+        uncertainty: sql`r.uncertainty`.as("uncertainty"),
         unit: sql`r.unit`.as("unit"),
         frames: sql`r.frames`.as("frames"),
         markIds: sql`r.mark_ids`.as("mark_ids"),
         needs: sql`r.needs`.as("needs"),
-        method: sql`'derived'::measurement_method`.as("method"),
+        method: sql`coalesce(r.method, 'marked'::measurement_method)`.as("method"),
         computedBy: sql`${sql.placeholder("computedBy")}::uuid`.as("computed_by"),
         computedAt: sql`now()`.as("computed_at"),
         measureRevision: sql`${sql.placeholder("measureRevision")}::int`.as("measure_revision"),
@@ -97,7 +99,7 @@ const storeQuery = db
   .onConflictDoUpdate({
     target: [measurements.clipId, measurements.key],
     set: {
-      value: excluded("value"), unit: excluded("unit"), frames: excluded("frames"), markIds: excluded("mark_ids"), needs: excluded("needs"),
+      value: excluded("value"), uncertainty: excluded("uncertainty"), unit: excluded("unit"), frames: excluded("frames"), markIds: excluded("mark_ids"), needs: excluded("needs"),
       method: excluded("method"), computedBy: excluded("computed_by"), computedAt: excluded("computed_at"), measureRevision: excluded("measure_revision"),
     },
     // Never over a computation from a later revision: concurrent saves may finish in any order.
@@ -112,7 +114,9 @@ const storeQuery = db
 async function storeMeasurements(subject: MeasureSubject, computed: Measurement[], computedBy: string | null) {
   const rows = computed.map((m) => ({
     key: m.key, value: m.value, unit: m.unit,
-    frames: m.value === null ? [] : m.frames, mark_ids: m.value === null ? [] : m.markIds, needs: m.value === null ? m.needs : [],
+    ...(m.value === null
+      ? { uncertainty: null, frames: [], mark_ids: [], needs: m.needs, method: null }
+      : { uncertainty: m.uncertainty, frames: m.frames, mark_ids: m.markIds, needs: [], method: m.method }),
   }));
   const { clip } = subject;
   await storeQuery.execute({ rows: JSON.stringify(rows), studioId: clip.studioId, clipId: clip.id, computedBy, measureRevision: clip.measureRevision });
@@ -137,7 +141,8 @@ type Row = typeof measurements.$inferSelect;
 /** A stored row back in the computation's shape (METRICS.md). */
 function fromRow(r: Row): Measurement {
   if (r.value === null) return { key: r.key, value: null, unit: r.unit, needs: r.needs };
-  return { key: r.key, value: r.value, unit: r.unit, frames: r.frames, markIds: r.markIds, method: "derived" };
+  const method = r.method === "tracked" || r.method === "mixed" ? r.method : "marked";
+  return { key: r.key, value: r.value, uncertainty: r.uncertainty, unit: r.unit, frames: r.frames, markIds: r.markIds, method };
 }
 
 /** The API's shape plus the studio's window for the key when it has one. */

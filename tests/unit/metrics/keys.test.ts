@@ -1,16 +1,22 @@
 import { describe, expect, it } from "vitest";
-import { VIEWS } from "@/lib/marks/types";
 import { computeMeasurements } from "@/lib/metrics/compute";
 import { formatMeasurement } from "@/lib/metrics/display";
 import { METRICS_BY_VIEW, signWordsFor } from "@/lib/metrics/keys";
 import { overheadClip } from "./scene";
 
 describe("metric keys for the screens", () => {
-  it("computeMeasurements lists exactly the keys and units each view declares", () => {
-    for (const view of VIEWS) {
-      const list = computeMeasurements(overheadClip({ view }), []);
-      expect(list.map((m) => [m.key, m.unit])).toEqual(METRICS_BY_VIEW[view].map((d) => [d.key, d.unit]));
-    }
+  it("lists the keys and units of docs/measurements.md for each view, in its order", () => {
+    const keysAndUnits = (view: "overhead" | "face-on" | "down-the-line") => computeMeasurements(overheadClip({ view }), []).map((m) => [m.key, m.unit]);
+    expect(keysAndUnits("overhead")).toEqual([
+      ["aim", "deg"], ["face_angle_impact", "deg"], ["path", "deg"], ["face_to_path", "deg"],
+      ["face_rotation_rate", "deg/s"], ["twist", "deg"], ["start_direction", "deg"], ["ball_speed", "m/s"],
+    ]);
+    expect(keysAndUnits("face-on")).toEqual([
+      ["shaft_lean_address", "deg"], ["shaft_lean_impact", "deg"], ["attack_angle", "deg"], ["dynamic_loft", "deg"],
+      ["launch_angle", "deg"], ["ball_speed", "m/s"], ["spin_rpm", "rpm"], ["roll_ratio", "ratio"], ["skid_distance", "m"],
+    ]);
+    expect(keysAndUnits("down-the-line")).toEqual([["sole_tilt_impact", "deg"], ["lie_change", "deg"]]);
+    expect(METRICS_BY_VIEW.overhead.find((d) => d.key === "path")?.label).toBe("Path");
   });
   it("carries the sign words of METRICS.md, with start direction mirrored for a left-hander", () => {
     expect(signWordsFor("overhead", "face_angle_impact", "right")).toEqual({ positive: "open", negative: "closed" });

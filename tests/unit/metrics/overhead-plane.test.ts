@@ -1,15 +1,18 @@
 import { describe, expect, it } from "vitest";
-import { applyHomography, homographyFromPoints, type Quad } from "@/lib/geometry/homography";
 import type { Vec2 } from "@/lib/geometry/vector";
 import type { StoredMark } from "@/lib/marks/types";
 import { computeMeasurements } from "@/lib/metrics/compute";
 import { overheadClip, overheadMarks, valuesByKey } from "./scene";
 
-// A tilted camera: ground millimetres → image pixels through a known projective map.
-const groundRect: Quad = [[-300, -400], [300, -400], [300, 200], [-300, 200]];
-const imageOfRect: Quad = [[700, 180], [1220, 200], [1380, 900], [560, 870]];
-const toImage = homographyFromPoints(groundRect, imageOfRect);
-const project = (p: Vec2): Vec2 => applyHomography(toImage, p);
+// A tilted camera: ground millimetres → image pixels through a projective map written out here
+// (not built with the code under test): x' = (0.9x + 0.05y + 960)/w, y' = (0.02x + 0.8y + 540)/w,
+// w = 0.00002x + 0.0004y + 1 (Hartley & Zisserman, Multiple View Geometry, §2.3: a plane's image).
+const project = ([x, y]: Vec2): Vec2 => {
+  const w = 0.00002 * x + 0.0004 * y + 1;
+  return [(0.9 * x + 0.05 * y + 960) / w, (0.02 * x + 0.8 * y + 540) / w];
+};
+const groundRect: Vec2[] = [[-300, -400], [300, -400], [300, 200], [-300, 200]];
+const imageOfRect = groundRect.map(project);
 
 const scene = { aimDeg: 1.2, faceDeg: -0.8, pathDeg: 2.5, startDeg: -0.6, rotationPerFrameDeg: 0.04, twistDeg: 0.3, ballStepPx: 7 };
 

@@ -2,6 +2,9 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { Vec2 } from "@/lib/geometry/vector";
 import { computeMeasurements } from "@/lib/metrics/compute";
+
+// Properties of the values: the uncertainty's Monte Carlo runs are not needed here.
+const FAST = { monteCarloRuns: 0 };
 import { overheadClip, overheadMarks, placeScale, valuesByKey, type OverheadScene } from "./scene";
 
 const angle = fc.double({ min: -12, max: 12, noNaN: true });
@@ -24,7 +27,7 @@ const rotateAndShift = (theta: number, dx: number, dy: number) => (p: Vec2): Vec
 describe("overhead properties", () => {
   it("recovers the scene's own angles and speed", () => {
     fc.assert(fc.property(sceneArb, (s) => {
-      const v = valuesByKey(computeMeasurements(overheadClip(), overheadMarks(s, rotateAndShift(0, 960, 540))));
+      const v = valuesByKey(computeMeasurements(overheadClip(), overheadMarks(s, rotateAndShift(0, 960, 540)), FAST));
       expect(v.aim).toBeCloseTo(s.aimDeg, 8);
       expect(v.face_angle_impact).toBeCloseTo(s.faceDeg, 8);
       expect(v.path).toBeCloseTo(s.pathDeg, 8);
@@ -37,8 +40,8 @@ describe("overhead properties", () => {
 
   it("rotating or translating the whole scene leaves the relative angles unchanged", () => {
     fc.assert(fc.property(sceneArb, fc.double({ min: -Math.PI, max: Math.PI, noNaN: true }), fc.double({ min: -500, max: 500, noNaN: true }), fc.double({ min: -500, max: 500, noNaN: true }), (s, theta, dx, dy) => {
-      const base = valuesByKey(computeMeasurements(overheadClip(), overheadMarks(s, rotateAndShift(0, 960, 540))));
-      const moved = valuesByKey(computeMeasurements(overheadClip(), overheadMarks(s, rotateAndShift(theta, 960 + dx, 540 + dy))));
+      const base = valuesByKey(computeMeasurements(overheadClip(), overheadMarks(s, rotateAndShift(0, 960, 540)), FAST));
+      const moved = valuesByKey(computeMeasurements(overheadClip(), overheadMarks(s, rotateAndShift(theta, 960 + dx, 540 + dy)), FAST));
       for (const key of RELATIVE_ANGLES) expect(moved[key]).toBeCloseTo(base[key]!, 7);
       expect(moved.ball_speed).toBeCloseTo(base.ball_speed!, 9);
     }));
@@ -49,9 +52,9 @@ describe("overhead properties", () => {
     fc.assert(fc.property(sceneArb, fc.double({ min: -Math.PI, max: Math.PI, noNaN: true }), fc.constantFrom("right" as const, "left" as const), (s, theta, handedness) => {
       const place = rotateAndShift(theta, 960, 540);
       const mirror = (p: Vec2): Vec2 => [width - place(p)[0], place(p)[1]];
-      const base = valuesByKey(computeMeasurements(overheadClip({ handedness }), overheadMarks(s, place)));
-      const declared = valuesByKey(computeMeasurements(overheadClip({ handedness, mirrored: true }), overheadMarks(s, mirror)));
-      const undeclared = valuesByKey(computeMeasurements(overheadClip({ handedness, mirrored: false }), overheadMarks(s, mirror)));
+      const base = valuesByKey(computeMeasurements(overheadClip({ handedness }), overheadMarks(s, place), FAST));
+      const declared = valuesByKey(computeMeasurements(overheadClip({ handedness, mirrored: true }), overheadMarks(s, mirror), FAST));
+      const undeclared = valuesByKey(computeMeasurements(overheadClip({ handedness, mirrored: false }), overheadMarks(s, mirror), FAST));
       for (const key of RELATIVE_ANGLES) expect(declared[key]).toBeCloseTo(base[key]!, 7);
       for (const key of ["aim", "face_angle_impact", "path", "start_direction"] as const) expect(undeclared[key]).toBeCloseTo(-base[key]!, 7);
     }));
@@ -60,8 +63,8 @@ describe("overhead properties", () => {
   it("a left-handed golfer on an unmirrored image reads as the mirror of a right-handed one", () => {
     fc.assert(fc.property(sceneArb, (s) => {
       const marks = overheadMarks(s, rotateAndShift(0, 960, 540));
-      const right = valuesByKey(computeMeasurements(overheadClip(), marks));
-      const left = valuesByKey(computeMeasurements(overheadClip({ handedness: "left" }), marks));
+      const right = valuesByKey(computeMeasurements(overheadClip(), marks, FAST));
+      const left = valuesByKey(computeMeasurements(overheadClip({ handedness: "left" }), marks, FAST));
       expect(left.face_angle_impact).toBeCloseTo(-right.face_angle_impact!, 9);
       expect(left.path).toBeCloseTo(-right.path!, 9);
     }));
@@ -71,13 +74,13 @@ describe("overhead properties", () => {
     fc.assert(fc.property(sceneArb, fc.double({ min: 0.25, max: 4, noNaN: true }), (s, k) => {
       const place = rotateAndShift(0.3, 960, 540);
       const scaled = (p: Vec2): Vec2 => [place(p)[0] * k, place(p)[1] * k];
-      const base = valuesByKey(computeMeasurements(overheadClip(), overheadMarks(s, place)));
+      const base = valuesByKey(computeMeasurements(overheadClip(), overheadMarks(s, place), FAST));
       // The ruler stays as drawn: the image's pixel speed grows k-fold, and so does the speed read from it.
-      const fixedRuler = valuesByKey(computeMeasurements(overheadClip(), overheadMarks(s, scaled)));
+      const fixedRuler = valuesByKey(computeMeasurements(overheadClip(), overheadMarks(s, scaled), FAST));
       for (const key of RELATIVE_ANGLES) expect(fixedRuler[key]).toBeCloseTo(base[key]!, 7);
       expect(fixedRuler.ball_speed! / base.ball_speed!).toBeCloseTo(k, 9);
       // Scaling the ruler too (a closer camera) leaves the true speed unchanged.
-      const wholeImage = valuesByKey(computeMeasurements(overheadClip(), placeScale(overheadMarks(s, scaled), (p) => [p[0] * k, p[1] * k])));
+      const wholeImage = valuesByKey(computeMeasurements(overheadClip(), placeScale(overheadMarks(s, scaled), (p) => [p[0] * k, p[1] * k]), FAST));
       expect(wholeImage.ball_speed).toBeCloseTo(base.ball_speed!, 9);
     }));
   });

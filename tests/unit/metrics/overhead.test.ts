@@ -15,7 +15,7 @@ describe("overhead measurements, hand-worked", () => {
     ];
     const aim = computeMeasurements(overheadClip(), marks).find((m) => m.key === "aim")!;
     expect(aim.value).toBeCloseTo(2, 12);
-    expect(aim).toMatchObject({ unit: "deg", frames: [5, ADDRESS], markIds: ["f", "t"], method: "derived" });
+    expect(aim).toMatchObject({ unit: "deg", frames: [5, ADDRESS], markIds: ["f", "t"], method: "marked" });
   });
 
   it("the face line's drawing direction does not matter", () => {
@@ -45,7 +45,9 @@ describe("overhead measurements, hand-worked", () => {
     const list = computeMeasurements(overheadClip({ moments: { address: null, impact: null } }), []);
     expect(list.map((m) => m.key)).toEqual(["aim", "face_angle_impact", "path", "face_to_path", "face_rotation_rate", "twist", "start_direction", "ball_speed"]);
     expect(list.every((m) => m.value === null)).toBe(true);
-    expect(list.find((m) => m.key === "aim")).toEqual({ key: "aim", value: null, unit: "deg", needs: ["the address frame moment"] });
+    // Every missing input at once, not the first one found.
+    expect(list.find((m) => m.key === "aim")).toEqual({ key: "aim", value: null, unit: "deg", needs: ["the address frame moment", "a target line (from the ball toward the hole)"] });
+    expect(list.find((m) => m.key === "face_rotation_rate")).toMatchObject({ needs: ["the address frame moment", "the impact frame moment", "a target line (from the ball toward the hole)"] });
   });
 
   it("says which marks are missing", () => {
