@@ -241,43 +241,63 @@ export interface GreyFrames {
 }
 
 /**
- * Fast first pass: every frame, small and grey, streamed to `onFrame` in order.
- * The in-loop deblocking filter is skipped: it costs time and changes nothing the
- * motion signal needs.
+ * Every frame, grey, streamed to `onFrame` in order. The frame buffer is reused for the next
+ * frame: copy what you keep. By default the in-loop deblocking filter is skipped: it costs time
+ * and changes nothing the motion signal needs; the tracker's full-size decode keeps it
+ * (`deblock: true`), as block edges would shift its sub-pixel fits.
  */
 export function readGreyFrames(
   file: string,
-  options: { width: number; height: number; signal: AbortSignal; onFrame: (frame: Uint8Array, index: number) => void; onStart?: (pid: number) => void },
+  options: {
+    width: number;
+    height: number;
+    signal: AbortSignal;
+    onFrame: (frame: Uint8Array, index: number) => void;
+    onStart?: (pid: number) => void;
+    deblock?: boolean;
+    niceness?: number;
+  },
 ): Promise<GreyFrames> {
   const frameBytes = options.width * options.height;
   const frameTimesS: number[] = [];
   let damaged = false;
-  let pending: Buffer = Buffer.alloc(0);
+  // One frame's buffer, filled chunk by chunk (pipe chunks are far smaller than a full-size frame).
+  const frame = Buffer.allocUnsafe(frameBytes);
+  let filled = 0;
   let index = 0;
   const sink = new Writable({
     write(chunk: Buffer, _encoding, done) {
-      pending = pending.length ? Buffer.concat([pending, chunk]) : chunk;
       let offset = 0;
-      while (pending.length - offset >= frameBytes) {
-        options.onFrame(pending.subarray(offset, offset + frameBytes), index++);
-        offset += frameBytes;
+      while (offset < chunk.length) {
+        const n = Math.min(frameBytes - filled, chunk.length - offset);
+        chunk.copy(frame, filled, offset, offset + n);
+        filled += n;
+        offset += n;
+        if (filled === frameBytes) {
+          options.onFrame(frame, index++);
+          filled = 0;
+        }
       }
-      pending = pending.subarray(offset);
       done();
     },
   });
   const command = ffmpeg(file)
-    .inputOptions(["-skip_loop_filter", "all"])
+    .inputOptions(options.deblock ? [] : ["-skip_loop_filter", "all"])
     .outputOptions([
       ...QUIET,
       "-map", "0:v:0",
-      "-vf", `scale=${options.width}:${options.height}:flags=area,format=gray,showinfo`,
+      // The tracker's full-size read takes the luma plane as decoded (no pixel-format conversion,
+      // no per-frame checksums): the cheapest grey there is.
+      "-vf", options.deblock
+        ? `scale=${options.width}:${options.height}:flags=area,format=yuv420p,extractplanes=y,showinfo=checksum=0`
+        : `scale=${options.width}:${options.height}:flags=area,format=gray,showinfo`,
       "-fps_mode", "passthrough",
       "-f", "rawvideo",
     ])
     .output(sink);
   return runCommand(command, {
     signal: options.signal,
+    niceness: options.niceness,
     onStart: options.onStart,
     onStderrLine: (line) => {
       const shown = /\bn:\s*(\d+)\s+pts:\s*-?\d+\s+pts_time:\s*(-?[\d.e+-]+)/.exec(line);

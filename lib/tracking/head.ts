@@ -1,0 +1,238 @@
+/**
+ * The clubhead and shaft against a background frame in which they are absent near the ball.
+ * `sign` says which way the head differs (+1: darker than the background). Per pixel the head's
+ * coverage is its difference from the background over the head's full contrast; the leading
+ * edge is where coverage crosses ½ along lines in the direction of travel (sub-pixel, bilinear),
+ * and a total-least-squares line through those points is the face (overhead) or the front of the
+ * head (other views). The head's one consistent point is that line's point at the middle of the
+ * head's body across the travel direction.
+ */
+import type { Vec2 } from "@/lib/geometry/vector";
+import { fitLineClipped, lineStdErrAt, pointOnLine, type LineFit } from "./fits";
+import { sampleBilinear, type GreyImage, type PixelBox } from "./image";
+
+export type HeadSearch = {
+  box: PixelBox;
+  /** unit direction of travel: the leading edge faces this way */
+  towards: Vec2;
+  sign: 1 | -1;
+  /** a pixel belongs to the head when it differs from the background by more than this */
+  threshold: number;
+  /** the pixel noise (grey levels, one s.d.) for the precision of centroids */
+  noise: number;
+  /** a disc left out (the ball), as it may differ between the frames */
+  exclude?: { x: number; y: number; r: number };
+};
+
+export type HeadEdge = {
+  edge: LineFit;
+  /** the middle of the leading edge */
+  point: Vec2;
+  pointPrecisionPx: number;
+  /** the edge line between the body's ends (across the travel direction) */
+  ends: [Vec2, Vec2];
+  linePrecisionPx: number;
+  centroid: Vec2;
+  pixels: number;
+  contrast: number;
+  /** body extent across the travel direction, from the centroid (px) */
+  body: [number, number];
+};
+
+type MaskPixel = { x: number; y: number; d: number };
+
+function headMask(frame: GreyImage, background: GreyImage, search: HeadSearch): MaskPixel[] {
+  const { box, sign, threshold, exclude } = search;
+  const out: MaskPixel[] = [];
+  const w = frame.width;
+  for (let y = box.y0; y < box.y1; y++) {
+    for (let x = box.x0; x < box.x1; x++) {
+      const d = sign * (background.data[y * w + x]! - frame.data[y * w + x]!);
+      if (d <= threshold) continue;
+      if (exclude && Math.hypot(x + 0.5 - exclude.x, y + 0.5 - exclude.y) < exclude.r) continue;
+      out.push({ x: x + 0.5, y: y + 0.5, d });
+    }
+  }
+  return out;
+}
+
+function percentile(values: number[], q: number): number {
+  const s = [...values].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.floor(q * s.length))]!;
+}
+
+/** Bins of 1 px across the travel direction; the body is the heaviest run of well-filled bins. */
+function bodyRun(across: number[]): [number, number] | null {
+  const lo = Math.floor(Math.min(...across));
+  const counts = new Map<number, number>();
+  for (const s of across) counts.set(Math.floor(s) - lo, (counts.get(Math.floor(s) - lo) ?? 0) + 1);
+  const max = Math.max(...counts.values());
+  let best: [number, number] | null = null, bestSum = 0;
+  let start = -1, sum = 0;
+  const top = Math.max(...counts.keys());
+  for (let b = 0; b <= top + 1; b++) {
+    const c = counts.get(b) ?? 0;
+    if (c >= 0.4 * max) {
+      if (start < 0) { start = b; sum = 0; }
+      sum += c;
+    } else if (start >= 0) {
+      if (sum > bestSum) { bestSum = sum; best = [start + lo, b - 1 + lo]; }
+      start = -1;
+    }
+  }
+  return best;
+}
+
+export const MIN_HEAD_PIXELS = 40;
+
+/**
+ * The edge at the half level between this line's own outside (2 px out) and inside (2.5 px in):
+ * the background's texture makes the head's contrast differ from place to place, and a global
+ * level would put the crossing too deep or too shallow.
+ */
+function refineEdge(profile: (a: number) => number, rough: number): number {
+  const outside = profile(rough + 2), inside = profile(rough - 2.5);
+  if (!(inside - outside > 0.2)) return rough;
+  const half = (inside + outside) / 2;
+  let prev = profile(rough + 1.5);
+  for (let a = rough + 1.25; a >= rough - 1.5; a -= 0.25) {
+    const c = profile(a);
+    if (c >= half && prev < half) return a + 0.25 * ((c - half) / (c - prev));
+    prev = c;
+  }
+  return rough;
+}
+
+export function findHeadEdge(frame: GreyImage, background: GreyImage, search: HeadSearch): HeadEdge | null {
+  const mask = headMask(frame, background, search);
+  if (mask.length < MIN_HEAD_PIXELS) return null;
+  const contrast = percentile(mask.map((m) => m.d), 0.9);
+  let cx = 0, cy = 0;
+  for (const m of mask) { cx += m.x; cy += m.y; }
+  const centroid: Vec2 = [cx / mask.length, cy / mask.length];
+  const d = search.towards;
+  const p: Vec2 = [-d[1], d[0]];
+  const along = (x: number, y: number) => (x - centroid[0]) * d[0] + (y - centroid[1]) * d[1];
+  const across = (x: number, y: number) => (x - centroid[0]) * p[0] + (y - centroid[1]) * p[1];
+  const run = bodyRun(mask.map((m) => across(m.x, m.y)));
+  if (!run || run[1] - run[0] < 4) return null;
+  const [b0, b1] = run;
+  // Coverage-weighted middle of the body across the travel direction, and its standard error.
+  let sw = 0, sws = 0;
+  const body: { s: number; c: number }[] = [];
+  const frontByBin = new Map<number, number>();
+  for (const m of mask) {
+    const s = across(m.x, m.y);
+    const bin = Math.floor(s);
+    if (bin < b0 || bin > b1) continue;
+    const c = Math.min(1, m.d / contrast);
+    body.push({ s, c });
+    sw += c; sws += c * s;
+    frontByBin.set(bin, Math.max(frontByBin.get(bin) ?? -Infinity, along(m.x, m.y)));
+  }
+  const sMid = sws / sw;
+  const sigmaC = search.noise / contrast;
+  // Pixel noise through the weighted mean, and the body's two thresholded ends: each is uncertain
+  // by a pixel's 1/√12 (uniform), the middle by half their root-sum-square.
+  const sMidErr = Math.hypot((sigmaC * Math.sqrt(body.reduce((acc, b) => acc + (b.s - sMid) ** 2, 0))) / sw, Math.SQRT1_2 / Math.sqrt(12));
+
+  const coverage = (x: number, y: number) => (search.sign * (sampleBilinear(background, x, y) - sampleBilinear(frame, x, y))) / contrast;
+  const trim = Math.max(1, Math.round((b1 - b0) * 0.12));
+  const edgePoints: Vec2[] = [];
+  for (let bin = b0 + trim; bin <= b1 - trim; bin++) {
+    const front = frontByBin.get(bin);
+    if (front === undefined) continue;
+    const s = bin + 0.5;
+    const at = (a: number): Vec2 => [centroid[0] + d[0] * a + p[0] * s, centroid[1] + d[1] * a + p[1] * s];
+    let prevA = front + 2;
+    let prev = coverage(...at(prevA));
+    if (!(prev < 0.5)) continue;
+    for (let a = prevA - 0.25; a >= front - 6; a -= 0.25) {
+      const c = coverage(...at(a));
+      if (Number.isNaN(c)) break;
+      if (c >= 0.5) {
+        const rough = a + 0.25 * ((c - 0.5) / (c - prev));
+        edgePoints.push(at(refineEdge((t) => coverage(...at(t)), rough)));
+        break;
+      }
+      prev = c; prevA = a;
+    }
+  }
+  if (edgePoints.length < 5) return null;
+  const edge = fitLineClipped(edgePoints, 3, 3, 0.3);
+  if (!edge) return null;
+  const dirAcross = edge.direction[0] * p[0] + edge.direction[1] * p[1];
+  // The leading edge runs across the travel direction; otherwise this is not a head's front.
+  if (Math.abs(dirAcross) < 0.7) return null;
+  const tAt = (s: number) => (s - across(...edge.centre)) / dirAcross;
+  const tMid = tAt(sMid);
+  const point = pointOnLine(edge, tMid);
+  const tEnds = [tAt(b0 + trim), tAt(b1 - trim + 1)] as const;
+  const ends: [Vec2, Vec2] = [pointOnLine(edge, tEnds[0]), pointOnLine(edge, tEnds[1])];
+  // Floors: the sub-pixel edge interpolation's own bias on a sampled profile (0.05 px).
+  const pointPrecisionPx = Math.hypot(lineStdErrAt(edge, tMid), sMidErr, 0.05);
+  const linePrecisionPx = Math.hypot(Math.max(lineStdErrAt(edge, tEnds[0]), lineStdErrAt(edge, tEnds[1])), 0.05);
+  return { edge, point, pointPrecisionPx, ends, linePrecisionPx, centroid, pixels: mask.length, contrast, body: [b0, b1 + 1] };
+}
+
+export type ShaftLine = { ends: [Vec2, Vec2]; precisionPx: number; line: LineFit };
+
+/**
+ * The shaft rising from the head: head-coloured pixels beyond the head's body across the travel
+ * direction (on the side where there are more of them). Per 1-px level across, the shaft's
+ * centre is the coverage-weighted mean position along the travel direction; a clipped
+ * total-least-squares line through those centres is the shaft.
+ */
+export function findShaftLine(frame: GreyImage, background: GreyImage, search: HeadSearch, head: HeadEdge): ShaftLine | null {
+  const mask = headMask(frame, background, search);
+  const d = search.towards;
+  const p: Vec2 = [-d[1], d[0]];
+  const [c0, c1] = head.centroid;
+  const rel = mask.map((m) => ({ a: (m.x - c0) * d[0] + (m.y - c1) * d[1], s: (m.x - c0) * p[0] + (m.y - c1) * p[1], c: Math.min(1, m.d / head.contrast) }));
+  const beyondHigh = rel.filter((r) => r.s > head.body[1] + 1);
+  const beyondLow = rel.filter((r) => r.s < head.body[0] - 1);
+  const side = beyondHigh.length >= beyondLow.length ? beyondHigh : beyondLow;
+  if (side.length < 20) return null;
+  const levels = new Map<number, { w: number; wa: number }>();
+  for (const r of side) {
+    const level = Math.floor(r.s);
+    const acc = levels.get(level) ?? { w: 0, wa: 0 };
+    acc.w += r.c; acc.wa += r.c * r.a;
+    levels.set(level, acc);
+  }
+  const centres: Vec2[] = [];
+  for (const [level, acc] of levels) {
+    if (acc.w < 0.5) continue;
+    const a = acc.wa / acc.w, s = level + 0.5;
+    centres.push([c0 + d[0] * a + p[0] * s, c1 + d[1] * a + p[1] * s]);
+  }
+  if (centres.length < 8) return null;
+  const line = fitLineClipped(centres, 2.5, 4, 0.5);
+  if (!line || line.n < 8) return null;
+  // The kept centres' extent along the line gives the two ends.
+  const ts = centres.map(([x, y]) => (x - line.centre[0]) * line.direction[0] + (y - line.centre[1]) * line.direction[1]);
+  const tMin = Math.min(...ts), tMax = Math.max(...ts);
+  const precisionPx = Math.hypot(Math.max(lineStdErrAt(line, tMin), lineStdErrAt(line, tMax)), 0.05);
+  return { ends: [pointOnLine(line, tMin), pointOnLine(line, tMax)], precisionPx, line };
+}
+
+/** Centroid of the pixels that differ from the background like the head does; null when too few. */
+export function changedCentroid(frame: GreyImage, background: GreyImage, search: Omit<HeadSearch, "towards" | "noise">): Vec2 | null {
+  const mask = headMask(frame, background, { ...search, towards: [1, 0], noise: 0 });
+  if (mask.length < MIN_HEAD_PIXELS) return null;
+  let x = 0, y = 0;
+  for (const m of mask) { x += m.x; y += m.y; }
+  return [x / mask.length, y / mask.length];
+}
+
+/** Which way the head differs from the background in the box: +1 darker, −1 lighter. */
+export function headSign(frame: GreyImage, background: GreyImage, box: PixelBox, threshold: number): 1 | -1 {
+  let sum = 0;
+  for (let y = box.y0; y < box.y1; y++) {
+    for (let x = box.x0; x < box.x1; x++) {
+      const d = background.data[y * frame.width + x]! - frame.data[y * frame.width + x]!;
+      if (Math.abs(d) > threshold) sum += d;
+    }
+  }
+  return sum >= 0 ? 1 : -1;
+}

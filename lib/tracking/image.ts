@@ -1,0 +1,53 @@
+/**
+ * Grey images as plain arrays, and the sampling the tracker's fits use. Coordinates are
+ * continuous: pixel (i, j) covers [i, i+1) × [j, j+1), so its centre is at (i + 0.5, j + 0.5),
+ * as for hand marks.
+ */
+export type GreyImage = { data: Uint8Array; width: number; height: number };
+
+/** A rectangle of whole pixels: x0 ≤ x < x1, y0 ≤ y < y1. */
+export type PixelBox = { x0: number; y0: number; x1: number; y1: number };
+
+/** Bilinear value at a continuous point; NaN outside the pixel centres' hull. */
+export function sampleBilinear(image: GreyImage, x: number, y: number): number {
+  const u = x - 0.5, v = y - 0.5;
+  const i = Math.floor(u), j = Math.floor(v);
+  if (i < 0 || j < 0 || i + 1 >= image.width || j + 1 >= image.height) return NaN;
+  const fx = u - i, fy = v - j;
+  const row = j * image.width + i;
+  const d = image.data;
+  const top = d[row]! + (d[row + 1]! - d[row]!) * fx;
+  const bottom = d[row + image.width]! + (d[row + image.width + 1]! - d[row + image.width]!) * fx;
+  return top + (bottom - top) * fy;
+}
+
+/** The box around a centre, clipped to the image. */
+export function boxAround(image: Pick<GreyImage, "width" | "height">, cx: number, cy: number, halfSize: number): PixelBox {
+  return {
+    x0: Math.max(0, Math.floor(cx - halfSize)),
+    y0: Math.max(0, Math.floor(cy - halfSize)),
+    x1: Math.min(image.width, Math.ceil(cx + halfSize)),
+    y1: Math.min(image.height, Math.ceil(cy + halfSize)),
+  };
+}
+
+/** A copy of the box's pixels, as an image of its own, with its offset. */
+export function cropImage(image: GreyImage, box: PixelBox): GreyImage & { offsetX: number; offsetY: number } {
+  const width = box.x1 - box.x0, height = box.y1 - box.y0;
+  const data = new Uint8Array(width * height);
+  for (let y = 0; y < height; y++) data.set(image.data.subarray((box.y0 + y) * image.width + box.x0, (box.y0 + y) * image.width + box.x1), y * width);
+  return { data, width, height, offsetX: box.x0, offsetY: box.y0 };
+}
+
+export function median(values: number[]): number {
+  if (values.length === 0) return NaN;
+  const s = [...values].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
+}
+
+/** Robust standard deviation: 1.4826 × median absolute deviation (normal consistency). */
+export function robustStd(values: number[]): number {
+  const m = median(values);
+  return 1.4826 * median(values.map((v) => Math.abs(v - m)));
+}
