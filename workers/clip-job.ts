@@ -9,9 +9,13 @@ import { Readable } from "node:stream";
 import { pipeline } from "node:stream/promises";
 import { eq } from "drizzle-orm";
 import { db, schema } from "@/db";
+import { storeTrackingResult } from "@/lib/server/dal/proposals";
 import { clipKeys, clipPrefix, deleteKeys, getObjectStream, listKeys } from "@/lib/server/storage";
+import type { TrackingResult } from "@/lib/tracking/types";
+import { trackClipFile } from "./tracking/track-clip";
 import { uploadFiles, type FileUpload } from "./upload-files";
 import { ClipRefusedError, processClipFile } from "./video";
+import { displaySize, probeHeader } from "./video/ffmpeg";
 
 const { clips } = schema;
 const frameName = (n: number) => `${String(n).padStart(6, "0")}.jpg`;
@@ -28,12 +32,25 @@ export async function runClipJob(clipId: string, signal: AbortSignal, isLastTry:
   await setClip(clipId, { state: "processing", progress: 0, failureReason: null });
   const work = await mkdtemp(path.join(tmpdir(), "fitframe-clip-"));
   const keys = clipKeys(clip.studioId, clip.id);
+  const stopTracking = new AbortController();
+  let tracking: Promise<TrackingResult | null> = Promise.resolve(null);
   try {
     const input = path.join(work, "source");
     const body = await getObjectStream(clip.objectKey);
     if (!body) throw new Error("the uploaded file is missing from the store");
     await pipeline(body as Readable, createWriteStream(input), { signal });
     mark("downloaded");
+    // The tracking pass runs beside processing (its own decode, on the second core); its result
+    // is stored once the clip is ready. It never fails the job: without it the fitter marks by hand.
+    tracking = clip.trackingEnabled
+      ? startTracking(input, clip.view, clip.captureFps, AbortSignal.any([signal, stopTracking.signal])).then(
+          (result) => (mark("tracked"), result),
+          (err: unknown) => {
+            if (!signal.aborted && !stopTracking.signal.aborted) console.error(JSON.stringify({ event: "clip_tracking_failed", clipId, error: String(err) }));
+            return null;
+          },
+        )
+      : Promise.resolve(null);
 
     const outDir = path.join(work, "out");
     const framesDir = path.join(outDir, "frames");
@@ -96,6 +113,11 @@ export async function runClipJob(clipId: string, signal: AbortSignal, isLastTry:
       containerFps: result.containerFps, durationS: result.frameCount / result.containerFps,
       motionSignal: result.motionSignal, suggestedImpactFrame: result.suggestedImpact?.frame ?? null,
     });
+    const tracked = await tracking;
+    if (tracked) {
+      await storeTrackingResult(clipId, tracked, result.suggestedImpact?.frame ?? null);
+      mark("proposalsStored");
+    }
     return { outcome: "ready", seconds };
   } catch (err) {
     if (err instanceof ClipRefusedError) {
@@ -106,9 +128,24 @@ export async function runClipJob(clipId: string, signal: AbortSignal, isLastTry:
     else await setClip(clipId, { state: "queued" });
     throw err;
   } finally {
+    // A failed run stops its tracker, and waits for its ffmpeg to exit, before the source goes.
+    stopTracking.abort();
+    await tracking;
     await rm(work, { recursive: true, force: true });
   }
 }
+
+/** The tracker on the displayed picture; a file the probe refuses is left to processing to refuse. */
+async function startTracking(input: string, view: typeof clips.$inferSelect.view, captureFps: number, signal: AbortSignal): Promise<TrackingResult | null> {
+  const header = await probeHeader(input, signal).catch(() => null);
+  if (!header?.hasVideo || header.isStillImage || header.width === 0) return null;
+  const { width, height } = displaySize(header);
+  // The motion suggestion is not known yet; the store applies it when the ball gives none.
+  return trackClipFile(input, { view, captureFps, width, height, frameCount: header.headerFrameCount ?? 0, motionImpactFrame: null }, signal, { niceness: TRACKING_NICENESS });
+}
+
+/** The tracker's decode yields to the window frames (the fitter waits for those), like the full pass. */
+const TRACKING_NICENESS = 10;
 
 /** A refused clip keeps its row (with the reason) but no objects: nothing stray in the store. */
 async function fail(studioId: string, clipId: string, reason: string) {

@@ -3,7 +3,9 @@
 import type PgBoss from "pg-boss";
 import { env } from "@/lib/config/env";
 import { CLIP_PROCESS_QUEUE, clipProcessPayload, clipProcessPolicy } from "@/lib/jobs/clip-process";
+import { CLIP_TRACK_QUEUE, clipTrackPayload, clipTrackPolicy } from "@/lib/jobs/clip-track";
 import { runClipJob } from "./clip-job";
+import { runTrackJob } from "./clip-track-job";
 import { sendAllDueReminders } from "@/lib/server/dal/bookings";
 import { startCommentMail } from "./comment-mail";
 
@@ -33,6 +35,22 @@ export async function registerJobs(boss: PgBoss, concurrency: number): Promise<v
   for (let i = 0; i < concurrency; i++) {
     await boss.work(CLIP_PROCESS_QUEUE, { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: 0.5 }, handler);
   }
+  // Tracking re-runs: one at a time per process (each takes a core for a few seconds).
+  await boss.createQueue(CLIP_TRACK_QUEUE, { name: CLIP_TRACK_QUEUE, ...clipTrackPolicy(env().CLIP_JOB_EXPIRE_S) });
+  await boss.work(CLIP_TRACK_QUEUE, { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: 0.5 }, async ([job]) => {
+    if (!job) return;
+    const { clipId } = clipTrackPayload.parse(job.data);
+    const controller = new AbortController();
+    const expiry = setTimeout(() => controller.abort(), Math.max(5, job.expireInSeconds - 5) * 1000);
+    running.add(controller);
+    try {
+      const result = await runTrackJob(clipId, controller.signal);
+      console.log(JSON.stringify({ event: "clip_track_job", clipId, ...result, try: job.retryCount + 1 }));
+    } finally {
+      clearTimeout(expiry);
+      running.delete(controller);
+    }
+  });
   // Batched comment e-mails: a polling loop over the outbox table (no queue needed).
   startCommentMail();
   // Visit reminders: every 15 minutes one worker (pg-boss picks it) mails the next day's visits.
