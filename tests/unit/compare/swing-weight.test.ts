@@ -11,10 +11,10 @@ describe("swing weight of a build (14-inch fulcrum; one point ≈ 1.75 in·oz, c
   it("says what is missing", () => {
     expect(buildSwingWeight({ ...base, gripMassG: null })).toEqual({ ok: false, missing: ["gripMassG"] });
   });
-  it("derived: +2.43 g at 20.5 in beyond the fulcrum adds about one point (REFERENCES.md)", () => {
+  it("derived: +2.4201 g at 20.5 in beyond the fulcrum adds one point (1.75 × 28.3495 / 20.5, REFERENCES.md)", () => {
     const a = { ...base, lengthIn: 34.5 };
-    const { computedPoints } = swingWeightChange(a, { ...a, headMassG: 350 + 2.43 });
-    expect(computedPoints).toBeCloseTo(1, 2);
+    const { computedPoints } = swingWeightChange(a, { ...a, headMassG: 350 + 2.4201 });
+    expect(computedPoints).toBeCloseTo(1, 3);
   });
   it("common practice rules of thumb: +2 g head +1, +½ in +3, +5 g grip −1", () => {
     expect(ruleOfThumbPoints(base, { ...base, headMassG: 352 })).toBeCloseTo(1, 12);

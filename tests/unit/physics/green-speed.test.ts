@@ -1,7 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { meanOfDirections, slopeCorrectedReading, stimpmeterReading } from "@/lib/physics/green-speed";
 import { rollOutDistance, rollingDeceleration, speedToRoll, STIMP_RAMP_SPEED_MPS } from "@/lib/physics/roll";
-import { METRES_PER_FOOT } from "@/lib/physics/units";
+
+// 1 ft = 0.3048 m exactly (international yard and pound agreement, 1959).
+const FOOT_M = 0.3048;
 
 describe("Stimpmeter reading (USGA Stimpmeter Instruction Booklet)", () => {
   it("USGA booklet: 10.0 ft and 10.5 ft give 10.25 ft", () => {
@@ -24,16 +26,18 @@ describe("slope correction (Brede 1990, USGA Green Section Record 28(6))", () =>
 });
 
 describe("flat-green roll model a = v0²/(2S) (derived; ramp speed 6.0 ft/s from memory)", () => {
-  it("ramp speed 1.8288 m/s is 6.0 ft/s", () => {
-    expect(STIMP_RAMP_SPEED_MPS / METRES_PER_FOOT).toBeCloseTo(6.0, 12);
+  it("ramp speed 6.0 ft/s (from memory) = 6.0 × 0.3048 = 1.8288 m/s", () => {
+    expect(STIMP_RAMP_SPEED_MPS).toBeCloseTo(1.8288, 12);
   });
   it("derived: S = 10 ft → 0.5486 m/s², S = 8 ft → 0.6858 m/s²", () => {
-    expect(rollingDeceleration(10 * METRES_PER_FOOT)).toBeCloseTo(0.5486, 4);
-    expect(rollingDeceleration(8 * METRES_PER_FOOT)).toBeCloseTo(0.6858, 4);
+    expect(rollingDeceleration(10 * FOOT_M)).toBeCloseTo(0.5486, 4);
+    expect(rollingDeceleration(8 * FOOT_M)).toBeCloseTo(0.6858, 4);
   });
-  it("derived: 20 ft on a 10 ft green needs 8.485 ft/s, and that speed rolls 20 ft back", () => {
-    const v = speedToRoll(20 * METRES_PER_FOOT, 10 * METRES_PER_FOOT);
-    expect(v / METRES_PER_FOOT).toBeCloseTo(8.485, 3);
-    expect(rollOutDistance(v, 10 * METRES_PER_FOOT) / METRES_PER_FOOT).toBeCloseTo(20, 10);
+  it("derived: 20 ft on a 10 ft green needs 6·√(20/10) = 8.485 ft/s", () => {
+    expect(speedToRoll(20 * FOOT_M, 10 * FOOT_M) / FOOT_M).toBeCloseTo(8.485, 3);
+  });
+  it("derived: 8.485 ft/s on a 10 ft green rolls S·(v/v₀)² = 10 × (8.485/6)² = 19.9987 ft; 3 ft/s on an 8 ft green 8 × (3/6)² = 2 ft", () => {
+    expect(rollOutDistance(8.485 * FOOT_M, 10 * FOOT_M) / FOOT_M).toBeCloseTo(19.9987, 4);
+    expect(rollOutDistance(3 * FOOT_M, 8 * FOOT_M) / FOOT_M).toBeCloseTo(2, 10);
   });
 });

@@ -1,17 +1,19 @@
 import { describe, expect, it } from "vitest";
 import { alignedFrame, sharedSpan } from "@/lib/playback/align";
-import { containTransform, MAX_CANVAS_PIXELS, overlayCanvasSize } from "@/lib/playback/canvas-size";
-import { HOLD_S, markOpacity, visibleMarks } from "@/lib/playback/marks-visible";
+import { containTransform, overlayCanvasSize } from "@/lib/playback/canvas-size";
+import { markOpacity, visibleMarks } from "@/lib/playback/marks-visible";
 
 describe("marks over playback", () => {
   it("a mark is fully drawn on its own frame and not before it", () => {
     expect(markOpacity(100, 100, 240)).toBe(1);
     expect(markOpacity(100, 99, 240)).toBe(0);
   });
-  it("fades over HOLD_S of capture time, then is gone", () => {
-    const half = 100 + (HOLD_S / 2) * 240;
-    expect(markOpacity(100, half, 240)).toBeCloseTo(0.5, 6);
-    expect(markOpacity(100, 100 + HOLD_S * 240, 240)).toBe(0);
+  it("fades over 0.15 s of capture time (36 frames at 240 fps), then is gone", () => {
+    // 18 frames = 0.075 s: half way → 0.5; 9 frames = 0.0375 s → 1 − 0.25 = 0.75; 36 frames = 0.15 s → 0
+    expect(markOpacity(100, 118, 240)).toBeCloseTo(0.5, 12);
+    expect(markOpacity(100, 109, 240)).toBeCloseTo(0.75, 12);
+    expect(markOpacity(100, 135, 240)).toBeGreaterThan(0);
+    expect(markOpacity(100, 136, 240)).toBe(0);
   });
   it("lists only the marks visible at a frame", () => {
     const marks = [{ id: "a", frame: 10 }, { id: "b", frame: 50 }, { id: "c", frame: 12 }];
@@ -24,10 +26,12 @@ describe("overlay canvas size", () => {
     expect(overlayCanvasSize(375, 211, 3)).toEqual({ width: 750, height: 422, ratio: 2 });
     expect(overlayCanvasSize(375, 211, 1)).toEqual({ width: 375, height: 211, ratio: 1 });
   });
-  it("caps the area on a large element", () => {
+  it("caps the area at 1440 × 1440 px (far under mobile Safari's ~16.7 MP canvas limit, from memory) on a large element", () => {
+    // 2000 × 1200 at ratio 2 would be 9.6 MP; the cap gives ratio √(2 073 600 / 2 400 000) = 0.929516 → 1859 × 1115 px
     const s = overlayCanvasSize(2000, 1200, 2);
-    expect(s.width * s.height).toBeLessThanOrEqual(MAX_CANVAS_PIXELS);
-    expect(s.width / s.height).toBeCloseTo(2000 / 1200, 2);
+    expect(s.ratio).toBeCloseTo(0.929516, 6);
+    expect(s).toMatchObject({ width: 1859, height: 1115 });
+    expect(s.width * s.height).toBeLessThanOrEqual(2_073_600);
   });
   it("letterboxes a 16:9 source into a square box", () => {
     expect(containTransform(1280, 720, 400, 400)).toEqual({ scale: 400 / 1280, offsetX: 0, offsetY: (400 - 225) / 2 });
