@@ -1,5 +1,5 @@
 // Comparison of builds through the API, on values worked by hand; make probability against the
-// hand-worked case of REFERENCES.md (derived from the Rules of Golf hole radius).
+// hand-worked case of docs/references.md (derived from the Rules of Golf hole radius).
 import { beforeAll, describe, expect, it } from "vitest";
 import { call, signIn } from "../../support/http";
 import { makeWorld, PASSWORD, type World } from "../../support/world";
@@ -47,7 +47,7 @@ describe("GET /api/fittings/{id}/comparison", () => {
     expect(mallet.clipCount).toBe(5);
   });
 
-  it("make probability: μ = 0, σ = 1.0145° at 10 ft → 0.6827 (REFERENCES.md, hand-worked)", async () => {
+  it("make probability: μ = 0, σ = 1.0145° at 10 ft → 0.6827 (docs/references.md, hand-worked)", async () => {
     const res = await call(fitter, "GET", `/api/fittings/${w.own.fitting.id}/comparison`);
     const make = res.body.builds[0].make as { distanceFt: number; probability: number; windowDeg: number }[];
     expect(make.map((m) => m.distanceFt)).toEqual([3, 6, 10, 20]);

@@ -1,7 +1,7 @@
 // The .ics we attach, read back field by field (RFC 5545: CRLF lines, VCALENDAR/VEVENT,
 // DTSTART in UTC form "yyyymmddThhmmssZ" per §3.3.5), and the studio's notice rule.
 import { describe, expect, it } from "vitest";
-import { visitCalendar, visitUid } from "@/lib/booking/ics";
+import { visitCalendar } from "@/lib/booking/ics";
 import { refundOnCancel, withinNotice } from "@/lib/booking/notice";
 import { icsProperties, icsUtc, icsValue } from "./ics-fields";
 
@@ -22,14 +22,15 @@ describe("visit calendar file", () => {
     expect(icsUtc(icsValue(text, "DTSTART"))?.toISOString()).toBe("2026-10-25T09:00:00.000Z");
     expect(icsUtc(icsValue(text, "DTEND"))?.toISOString()).toBe("2026-10-25T10:00:00.000Z");
     expect(icsValue(text, "SUMMARY")).toBe("Full putter fitting at Larchfield Putting Rooms");
-    expect(icsValue(text, "UID")).toBe(visitUid(visit.bookingId));
+    // RFC 5545 §3.8.4.7: a globally unique id, the same for every message about this visit.
+    expect(icsValue(text, "UID")).toBe("booking-7d1c2a4e-0000-4000-8000-000000000001@fitframe");
     expect(text.split("\r\n").every((line) => Buffer.byteLength(line) <= 75)).toBe(true); // §3.1 line length
   });
   it("a cancellation keeps the UID and says CANCEL", () => {
     const text = visitCalendar({ ...visit, method: "cancel" });
     expect(icsValue(text, "METHOD")).toBe("CANCEL");
     expect(icsValue(text, "STATUS")).toBe("CANCELLED");
-    expect(icsValue(text, "UID")).toBe(visitUid(visit.bookingId));
+    expect(icsValue(text, "UID")).toBe("booking-7d1c2a4e-0000-4000-8000-000000000001@fitframe");
   });
 });
 

@@ -58,7 +58,7 @@ describe("compareBuilds (values worked by hand)", () => {
   });
 });
 
-describe("make probability per build (REFERENCES.md, holing window derived from the Rules of Golf hole)", () => {
+describe("make probability per build (docs/references.md, holing window derived from the Rules of Golf hole)", () => {
   it("hand-worked: μ = 0, σ = 1.0145° at 10 ft → 0.6827 (the ±1σ share of a normal)", () => {
     const summary = { n: 10, mean: 0, sd: 1.0145, median: 0, min: -2, max: 2, range: 4, shareInWindow: null };
     const chance = makeChances(summary, [10])[0]!;

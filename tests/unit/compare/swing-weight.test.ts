@@ -11,7 +11,7 @@ describe("swing weight of a build (14-inch fulcrum; one point ≈ 1.75 in·oz, c
   it("says what is missing", () => {
     expect(buildSwingWeight({ ...base, gripMassG: null })).toEqual({ ok: false, missing: ["gripMassG"] });
   });
-  it("derived: +2.4201 g at 20.5 in beyond the fulcrum adds one point (1.75 × 28.3495 / 20.5, REFERENCES.md)", () => {
+  it("derived: +2.4201 g at 20.5 in beyond the fulcrum adds one point (1.75 × 28.3495 / 20.5, docs/references.md)", () => {
     const a = { ...base, lengthIn: 34.5 };
     const { computedPoints } = swingWeightChange(a, { ...a, headMassG: 350 + 2.4201 });
     expect(computedPoints).toBeCloseTo(1, 3);

@@ -21,7 +21,7 @@ describe("swing weight on the 14-inch fulcrum scale", () => {
     // 530 g × (27.1981 − 14) in = 6995 g·in again
     expect(swingWeightFromBalance(530, 14415 / 530).momentInOz).toBeCloseTo(246.7414, 4);
   });
-  it("derived (REFERENCES.md): a head 20.5 in beyond the fulcrum needs 1.75 × 28.3495 / 20.5 = 2.4201 g per point at 1.75 in·oz per point (common practice)", () => {
+  it("derived (docs/references.md): a head 20.5 in beyond the fulcrum needs 1.75 × 28.3495 / 20.5 = 2.4201 g per point at 1.75 in·oz per point (common practice)", () => {
     const base = swingWeightFromComponents(putter(350, 34.5));
     const heavier = swingWeightFromComponents(putter(351, 34.5));
     expect(1 / swingWeightChangePoints(base, heavier)).toBeCloseTo(2.4201, 4);

@@ -3,7 +3,7 @@ import fc from "fast-check";
 import { beforeAll, describe, expect, it } from "vitest";
 import { applyHomography, homographyFromPoints, keepsOrientation, type Homography, type Quad } from "@/lib/geometry/homography";
 
-/** The few OpenCV.js calls used here: the cross-check library of REFERENCES.md (@techstark/opencv-js 4.12). */
+/** The few OpenCV.js calls used here: the cross-check library of docs/references.md (@techstark/opencv-js 4.12). */
 type CvMat = { data64F: Float64Array; delete(): void };
 type Cv = { Mat?: unknown; CV_32FC2: number; matFromArray(rows: number, cols: number, type: number, data: number[]): CvMat; getPerspectiveTransform(src: CvMat, dst: CvMat): CvMat };
 
@@ -44,7 +44,7 @@ describe("ground-plane homography", () => {
     }));
   });
 
-  it("reproduces the affine case of REFERENCES.md and maps (3.5, 3) to (3, 3)", () => {
+  it("reproduces the affine case of docs/references.md and maps (3.5, 3) to (3, 3)", () => {
     const h = homographyFromPoints([[1, 1], [2, 5], [6, 5], [5, 1]], [[1, 1], [1, 5], [5, 5], [5, 1]]);
     const expected = [[1, -0.25, 0.25], [0, 1, 0], [0, 0, 1]];
     h.forEach((row, i) => row.forEach((v, j) => expect(v).toBeCloseTo(expected[i]![j]!, 12)));
@@ -67,7 +67,7 @@ describe("ground-plane homography", () => {
     expect(keepsOrientation(horizon, [2, 0.5])).toBe(false);
   });
 
-  describe("against OpenCV's getPerspectiveTransform (cross-check library, REFERENCES.md)", () => {
+  describe("against OpenCV's getPerspectiveTransform (cross-check library, docs/references.md)", () => {
     let cv: Cv;
     beforeAll(async () => {
       ({ cv } = await loadOpenCv());
