@@ -1,6 +1,7 @@
 // The clip review screen in Chromium on a ready clip with real frames: draw the target line and
-// the face at address and impact, read the true angles, undo/redo through the API, and a
-// stale edit from a second tab gets the conflict message.
+// the face at address and impact, read the true angles with their ±, undo/redo through the API,
+// a stale edit from a second tab gets the conflict message, and a ground plane clicked in Z order is
+// refused with the server's words.
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Vec2 } from "@/lib/geometry/vector";
@@ -131,6 +132,14 @@ describe("clip review", () => {
     expect(measurementReads).toBe(0);
   });
 
+  it("each value carries its ± (the value's decimals, lighter) and how it was measured", async () => {
+    const aim = readout(page, "aim");
+    await expect.poll(() => aim.getByTestId("uncertainty").textContent(), { timeout: 15_000 }).toMatch(/^±(\d+\.\d|<0\.1)°$/);
+    expect(await aim.getByTestId("method").textContent()).toBe("marked");
+    // The value, then the ±, then the side: "+1.9° ±0.4° open".
+    expect(await aim.locator("dd").textContent()).toMatch(/^\+\d+\.\d°±(\d+\.\d|<0\.1)°open/);
+  });
+
   it("undo removes the last mark and redo brings it back, through the API", async () => {
     const before = await marksNow();
     const last = before.find((m) => m.role === "face" && m.frame === 20)!;
@@ -197,11 +206,22 @@ describe("clip review", () => {
     expect(balls.map((m) => Math.round(m.points[0]![0]))).toEqual([400, 410, 420]);
   });
 
+  it("a ground plane clicked in Z order (not around the rectangle) is refused with the server's words on screen", async () => {
+    const before = (await marksNow()).length;
+    await page.keyboard.press("7");
+    for (const p of [[100, 60], [540, 60], [100, 300], [540, 300]] as Vec2[]) await clickImage(page, p);
+    await expect.poll(() => page.getByTestId("notice").textContent(), { timeout: 10_000 }).toMatch(/^The mark was refused: .*(order|convex|cross)/i);
+    expect((await marksNow()).length).toBe(before);
+    await page.getByRole("button", { name: "Dismiss" }).click();
+    await page.keyboard.press("1");
+  });
+
   it("the help overlay lists the keys as a dialog", async () => {
     await page.keyboard.press("?");
     const dialog = page.getByRole("dialog", { name: "Keyboard" });
     await dialog.waitFor();
     expect(await dialog.textContent()).toContain("Set address / impact to this frame");
+    expect(await dialog.textContent()).toContain("Accept the tracked marks");
     await page.keyboard.press("Escape");
     await dialog.waitFor({ state: "hidden" });
   });
