@@ -102,17 +102,24 @@ function plan(count: number, seed: number): Plan[] {
   });
 }
 
-type Row = { view: ClipView; key: string; error: number; uncertainty: number | null; clean: boolean };
+/**
+ * `uncertainty`: as stated with the reference line drawn exactly (it comes from the truth), so the
+ * figure tests the tracker's own stated precision; `handUncertainty`: with that line stated as a
+ * hand click (1 px), as the screens show it to a fitter who drew it.
+ */
+type Row = { view: ClipView; key: string; error: number; uncertainty: number | null; handUncertainty: number | null };
 type ClipResult = { plan: Plan; truth: AnyClipTruth; tracking: TrackingResult; rows: Row[]; missing: string[]; impactError: number | null; addressInStill: boolean; seconds: { render: number; track: number } };
 
-function marksFrom(truth: AnyClipTruth, tracking: TrackingResult, address: number): StoredMark[] {
+function marksFrom(truth: AnyClipTruth, tracking: TrackingResult, address: number, referencePrecisionPx: number | null): StoredMark[] {
   const tracked: StoredMark[] = tracking.proposals.map((p, i) => ({
     id: `tracked-${i}`, frame: p.frame, kind: p.kind, role: p.role, points: p.points, ...(p.lengthMm ? { lengthMm: p.lengthMm } : {}),
     source: "tracked", precisionPx: p.precisionPx,
   }));
   const [a, b] = truth.referenceLine;
-  // The one hand mark: a long line a fitter draws once per camera (default hand precision).
-  const reference: StoredMark = { id: "hand-reference", frame: address, kind: "line", role: truth.view === "overhead" ? "target" : "ground", points: [[...a], [...b]], source: "hand" };
+  // The one hand mark: a long line a fitter draws once per camera.
+  const reference: StoredMark = {
+    id: "hand-reference", frame: address, kind: "line", role: truth.view === "overhead" ? "target" : "ground", points: [[...a], [...b]], source: "hand", precisionPx: referencePrecisionPx,
+  };
   return [...tracked, reference];
 }
 
@@ -130,20 +137,21 @@ async function measureClip(dir: string, p: Plan): Promise<ClipResult> {
     view: truth.view, width: o.width, height: o.height, frameCount: o.frameCount, captureFps: o.fps, handedness: "right", mirrored: false,
     moments: { address: addressFrame, impact: impactFrame }, staticLoftDeg: null, frictionMu: 0.2,
   };
-  const measurements = computeMeasurements(clip, marksFrom(truth, tracking, addressFrame ?? 0));
-  const clean = p.mix.name === "clean";
+  const measurements = computeMeasurements(clip, marksFrom(truth, tracking, addressFrame ?? 0, 0));
+  const asDrawn = computeMeasurements(clip, marksFrom(truth, tracking, addressFrame ?? 0, null));
   const rows: Row[] = [];
   const missing: string[] = [];
   for (const [key, expected] of Object.entries(truth.metrics)) {
     if (key === "face_to_path" || key === "lie_change" || key === "roll_ratio") continue; // follow from others in the table
     const m = measurements.find((x) => x.key === key);
-    if (!m || m.value === null) {
+    const hand = asDrawn.find((x) => x.key === key);
+    if (!m || m.value === null || !hand || hand.value === null) {
       missing.push(key);
       continue;
     }
+    const inUnit = (u: number | null) => (u === null ? null : RELATIVE.has(key) ? (u / Math.abs(expected)) * 100 : u);
     const error = RELATIVE.has(key) ? ((m.value - expected) / expected) * 100 : m.value - expected;
-    const uncertainty = m.uncertainty === null ? null : RELATIVE.has(key) ? (m.uncertainty / Math.abs(expected)) * 100 : m.uncertainty;
-    rows.push({ view: truth.view, key, error, uncertainty, clean });
+    rows.push({ view: truth.view, key, error, uncertainty: inUnit(m.uncertainty), handUncertainty: inUnit(hand.uncertainty) });
   }
   const scale = tracking.proposals.find((x) => x.kind === "scale");
   if (scale) {
@@ -151,7 +159,8 @@ async function measureClip(dir: string, p: Plan): Promise<ClipResult> {
     const length = Math.hypot(b[0] - a[0], b[1] - a[1]);
     const mmPerPx = (scale.lengthMm ?? 42.67) / length;
     // Two points each of precisionPx: the length's standard error is √2 · precision.
-    rows.push({ view: truth.view, key: "scale", error: ((mmPerPx - truth.mmPerPx) / truth.mmPerPx) * 100, uncertainty: ((Math.SQRT2 * scale.precisionPx) / length) * 100, clean });
+    const uncertainty = ((Math.SQRT2 * scale.precisionPx) / length) * 100;
+    rows.push({ view: truth.view, key: "scale", error: ((mmPerPx - truth.mmPerPx) / truth.mmPerPx) * 100, uncertainty, handUncertainty: uncertainty });
   } else missing.push("scale");
   const [still0, still1] = truth.addressFrames;
   return {
@@ -174,19 +183,23 @@ function quantiles(values: number[]): { median: number; p95: number } {
 function report(results: ClipResult[], wallSeconds: number): void {
   const rows = results.flatMap((r) => r.rows);
   console.log(`tracking accuracy: ${results.length} seeded clips (seed ${SEED}), ${VIEWS.length} views, ${MIXES.length} fault mixes`);
-  console.log("  metric per view             n  missing  median |err|  p95 |err|   goal     verdict (on p95)");
+  console.log("  metric per view                n  missing  median |err|  p95 |err|  median ±  within ±   goal   verdict (on p95)");
   for (const view of VIEWS) {
     const viewResults = results.filter((r) => r.truth.view === view);
     const keys = [...new Set(viewResults.flatMap((r) => [...Object.keys(r.truth.metrics), "scale"]))].filter((k) => k !== "face_to_path" && k !== "lie_change" && k !== "roll_ratio");
     for (const key of keys) {
-      const errors = rows.filter((r) => r.view === view && r.key === key).map((r) => r.error);
+      const keyRows = rows.filter((r) => r.view === view && r.key === key);
+      const errors = keyRows.map((r) => r.error);
+      const withU = keyRows.filter((r) => r.uncertainty !== null);
+      const within = withU.length ? `${fmt((100 * withU.filter((r) => Math.abs(r.error) <= r.uncertainty!).length) / withU.length, 0)} %` : "—";
+      const medianU = withU.length ? quantileSorted(withU.map((r) => r.uncertainty!).sort((a, b) => a - b), 0.5) : NaN;
       const missed = viewResults.filter((r) => r.missing.includes(key)).length;
       const q = quantiles(errors);
       const goal = GOALS[key];
       const unit = RELATIVE.has(key) ? "%" : "°";
       const verdict = !goal || !errors.length ? "" : q.p95 <= goal.limit ? "met" : q.median <= goal.limit ? "median only" : "missed";
       console.log(
-        `  ${pad(`${view} ${key}`, 27)} ${padL(String(errors.length), 2)}  ${padL(String(missed), 7)}  ${padL(fmt(q.median) + unit, 12)}  ${padL(fmt(q.p95) + unit, 9)}   ${pad(goal ? `${goal.limit}${unit}` : "—", 7)}  ${verdict}`,
+        `  ${pad(`${view} ${key}`, 30)} ${padL(String(errors.length), 2)}  ${padL(String(missed), 7)}  ${padL(fmt(q.median) + unit, 12)}  ${padL(fmt(q.p95) + unit, 9)}  ${padL(fmt(medianU) + unit, 8)}  ${padL(within, 8)}   ${pad(goal ? `${goal.limit}${unit}` : "—", 5)}  ${verdict}`,
       );
     }
   }
@@ -206,6 +219,11 @@ function report(results: ClipResult[], wallSeconds: number): void {
   const stated = rows.filter((r) => r.uncertainty !== null && r.key !== "scale");
   const covered = stated.filter((r) => Math.abs(r.error) <= r.uncertainty!).length;
   console.log(`  calibration: |error| ≤ stated uncertainty in ${covered}/${stated.length} pairs = ${fmt((100 * covered) / Math.max(1, stated.length), 0)} %  [goal ≥ 68 %]`);
+  const handStated = rows.filter((r) => r.handUncertainty !== null && r.key !== "scale");
+  const handCovered = handStated.filter((r) => Math.abs(r.error) <= r.handUncertainty!).length;
+  console.log(`    with the reference line stated as a 1 px hand click: ${handCovered}/${handStated.length} = ${fmt((100 * handCovered) / Math.max(1, handStated.length), 0)} %`);
+  const scales = rows.filter((r) => r.key === "scale");
+  console.log(`    the tracked scale alone (√2 · precision / length): ${scales.filter((r) => Math.abs(r.error) <= r.uncertainty!).length}/${scales.length}`);
   for (const view of VIEWS) {
     const s = stated.filter((r) => r.view === view);
     const c = s.filter((r) => Math.abs(r.error) <= r.uncertainty!).length;

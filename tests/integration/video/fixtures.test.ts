@@ -37,7 +37,7 @@ const greyAt = (frame: Uint8Array, width: number, p: Point) => {
   return sum / 9;
 };
 
-const small = { width: 640, height: 360, frameCount: 170, impactFrame: 110, ballSpeedPxPerFrame: 4 } as const;
+const small = { width: 640, height: 360, frameCount: 140, impactFrame: 100, ballSpeedPxPerFrame: 4 } as const;
 const faceOn = { ...small, view: "face-on", fps: 240, shaftLeanAddressDeg: 3, shaftLeanImpactDeg: 1, attackAngleDeg: 2, launchAngleDeg: 1.5 } as const;
 const downTheLine = { ...small, view: "down-the-line", fps: 240, soleTiltAddressDeg: 0, soleTiltImpactDeg: 2 } as const;
 const overhead = { ...small, fps: 240, faceAngleAddressDeg: 1, faceAngleImpactDeg: -1, startDirectionDeg: 0.5 } as const;
