@@ -21,7 +21,7 @@ beforeAll(async () => {
   w = await makeWorld();
   fitter = { cookie: (await signIn(w.fitter.email, PASSWORD)).cookie! };
   golfer = { cookie: (await signIn(w.own.account.email, PASSWORD)).cookie! };
-  await call(fitter, "PATCH", `/api/builds/${w.own.build.id}`, { headModel: "Mallet M2", neckStyle: "plumber", lengthIn: 34, lieDeg: 70, loftDeg: 3, headMassG: 355, gripName: "Pistol 60", gripMassG: 60, shaftMassG: 110 });
+  await call(fitter, "PATCH", `/api/builds/${w.own.build.id}`, { headModel: "Mallet M2", neckStyle: "plumber", lengthIn: 34, lieDeg: 70, loftDeg: 3, headMassG: 355, gripName: "Pistol 60", gripMassG: 60, shaftMassG: 110, designShaftLeanDeg: 2, gripMaxWidthIn: 1.76 });
   await addMeasuredClips(w, w.own.build, [0.3, -0.2, 0.1, 0].map((v) => ({ face_angle_impact: v, start_direction: v })));
   const issued = await call(fitter, "POST", `/api/fittings/${w.own.fitting.id}/specs`, { buildId: w.own.build.id, notes: "Keep the flat side up", buildShop: { gripOrientation: "flat side up", finishNotes: "black" } });
   expect(issued.status).toBe(201);
@@ -39,6 +39,8 @@ describe("issuing a spec", () => {
     const face = (first.data.keyMeasurements as { key: string; n: number; mean: number }[]).find((m) => m.key === "face_angle_impact")!;
     expect(face.n).toBe(4);
     expect(face.mean).toBeCloseTo(0.05, 12); // (0.3 − 0.2 + 0.1 + 0) / 4
+    // Equipment Rules 2019, Part 2, 3b(iii): a grip 1.76 in across is over the 1.75 in limit.
+    expect((first.data.warnings as { field: string }[]).map((x) => x.field)).toEqual(["gripMaxWidthIn"]);
   });
 
   it("the PDF: application/pdf, starts with %PDF, carries the golfer's name", async () => {
@@ -51,6 +53,9 @@ describe("issuing a spec", () => {
     expect(text).toContain(w.own.golfer.name);
     expect(text).toContain("Mallet M2");
     expect(text).toContain("flat side up");
+    expect(text).toContain("Designed shaft lean");
+    expect(text).toContain("2° forward");
+    expect(text).toContain("Equipment Rules, Part 2, 3b(iii)");
   });
 
   it("the e-mail reaches the golfer with the PDF attached", async () => {
