@@ -30,10 +30,11 @@ export function recommend(builds: readonly BuildComparison[]): Recommendation | 
 
 function fromStartDirection(ranked: BuildComparison[], all: readonly BuildComparison[]): Recommendation {
   const best = ranked[0]!;
-  const start = statOf(best, "start_direction")!.summary;
+  const startStats = statOf(best, "start_direction")!;
+  const start = startStats.summary;
   const at = (b: BuildComparison) => b.make.find((m) => m.distanceFt === FOCUS_FT)?.probability ?? null;
   const reasons = [
-    `Its putts started on line most often: mean start direction ${signedDeg(start.mean)}, spread (sd) ${degrees(start.sd!)} over ${start.n} putts.`,
+    `Its putts started on line most often: mean start direction ${signedDeg(start.mean)}, spread (sd) ${degrees(startStats.spread!)} over ${start.n} putts.`,
   ];
   const p = at(best);
   if (p !== null) reasons.push(`From ${FOCUS_FT} ft that start-direction spread gives an estimated ${percent(p)} of putts holed${ranked.length > 1 ? `, the highest of the ${ranked.length} builds with enough putts` : ""}.`);
@@ -49,9 +50,9 @@ function fromStartDirection(ranked: BuildComparison[], all: readonly BuildCompar
 
 function fromFaceSpread(builds: readonly BuildComparison[]): Recommendation | null {
   const candidates = builds
-    .map((b) => ({ b, face: statOf(b, "face_angle_impact")?.summary }))
-    .filter((c) => c.face && c.face.n >= MIN_PUTTS && c.face.sd !== null)
-    .sort((x, y) => x.face!.sd! - y.face!.sd!);
+    .map((b) => ({ b, face: statOf(b, "face_angle_impact") }))
+    .filter((c) => c.face && c.face.summary.n >= MIN_PUTTS && c.face.spread !== null)
+    .sort((x, y) => x.face!.spread! - y.face!.spread!);
   const best = candidates[0];
   if (!best) return null;
   return {
@@ -67,13 +68,16 @@ function fromFaceSpread(builds: readonly BuildComparison[]): Recommendation | nu
 
 function faceReasons(best: BuildComparison, all: readonly BuildComparison[]): string[] {
   const face = statOf(best, "face_angle_impact");
-  if (!face || face.summary.sd === null) return [];
+  if (!face || face.spread === null) return [];
   const reasons: string[] = [];
-  const others = all.filter((b) => b.buildId !== best.buildId).map((b) => statOf(b, "face_angle_impact")?.summary.sd).filter((s): s is number => s != null);
-  const steadiest = others.every((s) => face.summary.sd! <= s);
+  const others = all.filter((b) => b.buildId !== best.buildId).map((b) => statOf(b, "face_angle_impact")?.spread).filter((s): s is number => s != null);
+  const steadiest = others.every((s) => face.spread! <= s);
   reasons.push(
-    `Face angle at impact: mean ${signedDeg(face.summary.mean)}, spread ${degrees(face.summary.sd)}${steadiest && others.length > 0 ? ", the steadiest of the builds" : ""}.`,
+    `Face angle at impact: mean ${signedDeg(face.summary.mean)}, spread ${degrees(face.spread)}${steadiest && others.length > 0 ? ", the steadiest of the builds" : ""}.`,
   );
+  if (face.noise !== null && face.summary.sd !== null && face.noise >= face.summary.sd) {
+    reasons.push(`Its face spread is within the measurement's own precision (${degrees(face.noise)}): the putts may be steadier than can be told.`);
+  }
   if (face.window && face.summary.shareInWindow !== null) {
     const inside = Math.round(face.summary.shareInWindow * face.summary.n);
     reasons.push(`${inside} of ${face.summary.n} putts had the face inside the studio's window (${signedDeg(face.window.min)} to ${signedDeg(face.window.max)}).`);

@@ -9,7 +9,7 @@ export type MarkKind = (typeof MARK_KINDS)[number];
 export const MARK_ROLES = ["face", "target", "path", "shaft", "sole", "ground", "ball", "clubhead", "marker"] as const;
 export type MarkRole = (typeof MARK_ROLES)[number];
 
-/** Number of points each kind carries (METRICS.md, "Marks"). */
+/** Number of points each kind carries (docs/measurements.md, "Marks"). */
 export const POINTS_PER_KIND: Record<MarkKind, number> = { point: 1, line: 2, angle: 3, scale: 2, plane: 4 };
 
 export type MarkInput = {

@@ -2,7 +2,7 @@ import { normalize, type Vec2 } from "@/lib/geometry/vector";
 import type { StoredMark } from "@/lib/marks/types";
 import type { ClipContext } from "./types";
 
-/** Left-handed XOR mirrored reverses the reference directions (METRICS.md); both at once cancel. */
+/** Left-handed XOR mirrored reverses the reference directions (docs/measurements.md); both at once cancel. */
 export const reversesReference = (clip: Pick<ClipContext, "handedness" | "mirrored">): boolean =>
   (clip.handedness === "left") !== clip.mirrored;
 

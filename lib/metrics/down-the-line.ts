@@ -6,7 +6,7 @@ import { found, missing, type Outcome } from "./outcome";
 import { lastLine } from "./pick";
 import type { ClipContext } from "./types";
 
-// Down-the-line definitions of METRICS.md: g toward the toe, u up; heel up positive.
+// Down-the-line definitions of docs/measurements.md: g toward the toe, u up; heel up positive.
 export function downTheLineOutcomes(clip: ClipContext, marks: readonly StoredMark[]): Record<string, Outcome> {
   const tilt = soleTilt(clip, marks);
   // Heel up asks for a more upright lie by about the tilt, toe up a flatter one (common practice).

@@ -16,7 +16,7 @@ const def = (key: string, label: string, unit: string, positive?: string, negati
   signWords: positive && negative ? { positive, negative } : null,
 });
 
-/** Keys each view knows, in the order the API lists them (METRICS.md). */
+/** Keys each view knows, in the order the API lists them (docs/measurements.md). */
 export const METRICS_BY_VIEW: Record<View, readonly MetricDefinition[]> = {
   overhead: [
     def("aim", "Aim at address", "deg", "open", "closed"),

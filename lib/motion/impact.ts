@@ -1,6 +1,6 @@
 /**
  * Suggested impact frame from a motion signal (see signal.ts). Impact is the last frame
- * before the ball has moved (METRICS.md).
+ * before the ball has moved (docs/measurements.md).
  *
  * Method. Until impact the picture changes only where the head moves; a pendulum head
  * speeds up and slows down smoothly, so its share of the signal changes little from one

@@ -10,6 +10,7 @@ import { assertGolfer, assertStudio, type SignedInActor } from "../access";
 import { ApiError, forbidden, notFound } from "../http/errors";
 import { pgErrorCode } from "../pg-errors";
 import { sendBookingMail } from "./booking-mail";
+import { changeMeasureInput, clipsMeasuredWith } from "./measure-inputs";
 import { refundIfPaid } from "./booking-payments";
 import { BOOKING_WEEKS, findFreeSlot, fittingTypeOf, studioBySlug } from "./booking-slots";
 
@@ -46,7 +47,10 @@ export async function createBooking(actor: SignedInActor, slug: string, input: z
       studioId: studio.id, golferId: actor.golferId, fitterUserId: slot.fitterUserId, fittingTypeId: type.id,
       startsAt: slot.start, endsAt: slot.end, blockedUntil: slot.blockedUntil, feeMinor: type.feeMinor, currency: studio.currency, intake: input.intake,
     }).returning();
-    if (input.handedness) await db.update(golfers).set({ handedness: input.handedness, updatedAt: new Date() }).where(eq(golfers.id, actor.golferId));
+    if (input.handedness) {
+      const golferId = actor.golferId;
+      await changeMeasureInput((tx) => tx.update(golfers).set({ handedness: input.handedness, updatedAt: new Date() }).where(eq(golfers.id, golferId)), clipsMeasuredWith.golfer(golferId), actor.userId);
+    }
     return row!;
   } catch (err) {
     if (isOverlap(err)) throw slotTaken();

@@ -7,6 +7,7 @@ import type { buildDuplicateSchema, buildFieldsSchema, buildUpdateSchema } from 
 import type { SignedInActor } from "../access";
 import { notFound } from "../http/errors";
 import { fittingForWrite } from "./fittings";
+import { changeMeasureInput, clipsMeasuredWith } from "./measure-inputs";
 
 const { builds } = schema;
 
@@ -32,12 +33,17 @@ async function buildForWrite(actor: SignedInActor, id: string) {
 
 export async function updateBuild(actor: SignedInActor, id: string, input: z.infer<typeof buildUpdateSchema>) {
   const current = await buildForWrite(actor, id);
-  const [row] = await db
-    .update(builds)
-    .set({ ...input, updatedAt: new Date() })
-    .where(and(eq(builds.id, id), eq(builds.studioId, current.studioId)))
-    .returning();
-  return withChecks(row!);
+  // The static loft enters dynamic loft: the build's face-on clips are recomputed with the new one.
+  const loftChanged = input.loftDeg !== undefined && input.loftDeg !== current.loftDeg;
+  const row = await changeMeasureInput(async (tx) => {
+    const [updated] = await tx
+      .update(builds)
+      .set({ ...input, updatedAt: new Date() })
+      .where(and(eq(builds.id, id), eq(builds.studioId, current.studioId)))
+      .returning();
+    return updated!;
+  }, loftChanged ? clipsMeasuredWith.build(id) : null, actor.userId);
+  return withChecks(row);
 }
 
 /** A copy of a build with the given change, added at the end of the fitting (never a baseline). */

@@ -5,6 +5,7 @@ import { db, schema } from "@/db";
 import type { SignedInActor } from "../access";
 import { ApiError, notFound } from "../http/errors";
 import { loadClip, type LoadedClip } from "./clip-access";
+import { queueTracking } from "../queue";
 import { refreshMeasurements } from "./measurements";
 
 const { clips } = schema;
@@ -14,6 +15,8 @@ export const clipSettingsSchema = z
     captureFps: z.number().positive().max(100_000, "captureFps must be at most 100000 frames per second"),
     mirrored: z.boolean(),
     slowMotionFactor: z.number().positive().max(1000),
+    // Off: the tracker's proposals are left out of the measurements and not made again.
+    trackingEnabled: z.boolean(),
   })
   .partial()
   .strict();
@@ -34,6 +37,7 @@ function presentClip({ clip, golferId, handedness }: Pick<LoadedClip, "clip" | "
     width: clip.width, height: clip.height, frameCount: clip.frameCount, captureFps: clip.captureFps,
     slowMotionFactor: clip.slowMotionFactor, mirrored: clip.mirrored, durationS: clip.durationS,
     motionSignal: clip.motionSignal, suggestedImpactFrame: clip.suggestedImpactFrame, moments: momentsOf(clip),
+    trackingEnabled: clip.trackingEnabled, tracking: clip.tracking,
     handedness, golferId, fittingId: clip.fittingId, buildId: clip.buildId,
   };
 }
@@ -96,4 +100,41 @@ export async function setMoments(actor: SignedInActor, clipId: string, input: z.
     if (issues.length > 0) throw new ApiError("validation_failed", `The moments were refused: ${issues.map((i) => i.message).join("; ")}`, issues);
     return { addressFrame: next.address, takeawayFrame: next.takeaway, topFrame: next.top, impactFrame: next.impact, finishFrame: next.finish };
   });
+}
+
+export const acceptProposalsSchema = z.object({ overwrite: z.boolean().default(false) }).strict();
+
+type TrackedMoments = { addressFrame?: unknown; impactFrame?: unknown };
+const frameOr = (value: unknown, frameCount: number): number | null =>
+  typeof value === "number" && Number.isInteger(value) && value >= 0 && value < frameCount ? value : null;
+
+// POST /api/clips/{id}/proposals/accept: the tracker's address and impact become the clip's moments
+// (moments already set by hand stay unless `overwrite`), and its proposals are marked accepted.
+export async function acceptProposals(actor: SignedInActor, clipId: string, input: z.infer<typeof acceptProposalsSchema>) {
+  const loaded = await loadClip(actor, clipId, "golfer.write");
+  const { clip } = loaded;
+  if (clip.state !== "ready" || clip.frameCount == null) throw new ApiError("unprocessable", "Proposals can be accepted only on a ready clip.");
+  if (!clip.trackingEnabled) throw new ApiError("unprocessable", "Tracking is turned off for this clip: turn it on to use its proposals.");
+  if (!clip.tracking) throw new ApiError("unprocessable", "This clip has not been tracked yet: run tracking first.");
+  const frameCount = clip.frameCount;
+  return changeClip(actor, loaded, (current) => {
+    const summary = (current.tracking ?? {}) as TrackedMoments & Record<string, unknown>;
+    const address = frameOr(summary.addressFrame, frameCount);
+    const impact = frameOr(summary.impactFrame, frameCount) ?? current.suggestedImpactFrame;
+    const take = (now: number | null, proposed: number | null) => (now != null && !input.overwrite ? now : (proposed ?? now));
+    const next = { ...momentsOf(current), address: take(current.addressFrame, address), impact: take(current.impactFrame, impact) };
+    const issues = momentProblems(next, frameCount);
+    if (issues.length > 0) throw new ApiError("validation_failed", `The tracked moments do not fit this clip's: ${issues.map((i) => i.message).join("; ")}`, issues);
+    return { addressFrame: next.address, impactFrame: next.impact, tracking: { ...summary, acceptedAt: new Date().toISOString() } };
+  });
+}
+
+// POST /api/clips/{id}/tracking: runs the tracking pass again (after a change of capture rate or
+// moments); hand marks are never touched, the clip's proposals are replaced when it ends.
+export async function rerunTracking(actor: SignedInActor, clipId: string) {
+  const { clip } = await loadClip(actor, clipId, "golfer.write");
+  if (clip.state !== "ready") throw new ApiError("unprocessable", "Tracking can run only on a ready clip.");
+  if (!clip.trackingEnabled) throw new ApiError("unprocessable", "Tracking is turned off for this clip: turn it on first.");
+  const jobId = await queueTracking(clipId);
+  return { queued: jobId !== null, alreadyQueued: jobId === null };
 }

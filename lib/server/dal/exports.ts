@@ -8,22 +8,26 @@ import { ApiError } from "../http/errors";
 import { clipPrefix, deleteKeys, listKeys, presignDownload } from "../storage";
 import { getFitting } from "./fittings";
 import { getGolfer } from "./golfers";
+import { currentMeasurementRows } from "./measurements";
 
-const { builds, clips, measurements, fittings, marks, comments, specs, golfers, users, coachGolfers } = schema;
+const { builds, clips, fittings, marks, comments, specs, golfers, users, coachGolfers } = schema;
 
 /** A fitting's measurements as CSV: one row per clip per measurement. */
 export async function fittingMeasurementsCsv(actor: SignedInActor, fittingId: string) {
   const fitting = await getFitting(actor, fittingId);
-  const rows = await db
-    .select({
-      buildPosition: builds.position, buildLabel: builds.label, clipId: clips.id, view: clips.view, clipCreatedAt: clips.createdAt,
-      key: measurements.key, value: measurements.value, unit: measurements.unit, method: measurements.method,
-    })
-    .from(measurements)
-    .innerJoin(clips, eq(clips.id, measurements.clipId))
+  const clipRows = await db
+    .select({ buildPosition: builds.position, buildLabel: builds.label, clipId: clips.id, view: clips.view, clipCreatedAt: clips.createdAt })
+    .from(clips)
     .innerJoin(builds, eq(builds.id, clips.buildId))
     .where(and(eq(clips.fittingId, fittingId), eq(clips.studioId, fitting.studioId)))
-    .orderBy(asc(builds.position), asc(clips.createdAt), asc(clips.id), asc(measurements.key));
+    .orderBy(asc(builds.position), asc(clips.createdAt), asc(clips.id));
+  const byClip = new Map<string, Awaited<ReturnType<typeof currentMeasurementRows>>>();
+  for (const m of await currentMeasurementRows(clipRows.map((c) => c.clipId))) byClip.set(m.clipId, [...(byClip.get(m.clipId) ?? []), m]);
+  const rows = clipRows.flatMap((c) =>
+    (byClip.get(c.clipId) ?? [])
+      .sort((a, b) => a.key.localeCompare(b.key))
+      .map((m) => ({ ...c, key: m.key, value: m.value, uncertainty: m.uncertainty, unit: m.unit, method: m.method })),
+  );
   return measurementsCsv(rows.map((r) => ({ ...r, fittingId })));
 }
 
@@ -44,7 +48,7 @@ export async function exportGolferData(actor: SignedInActor, golferId: string) {
   const clipIds = clipRows.map((c) => c.id);
   const [markRows, measurementRows, commentRows] = clipIds.length === 0 ? [[], [], []] : await Promise.all([
     db.select().from(marks).where(inArray(marks.clipId, clipIds)),
-    db.select().from(measurements).where(inArray(measurements.clipId, clipIds)),
+    currentMeasurementRows(clipIds),
     db.select().from(comments).where(inArray(comments.clipId, clipIds)),
   ]);
   const clipsWithLinks = await Promise.all(

@@ -5,6 +5,7 @@ import { db, schema } from "@/db";
 import { golferListQuery, type consentSchema, type golferCreateSchema, type GolferListQuery, type golferUpdateSchema } from "@/lib/schemas/golfer";
 import { assertGolfer, assertStudio, type SignedInActor } from "../access";
 import { notFound } from "../http/errors";
+import { changeMeasureInput, clipsMeasuredWith } from "./measure-inputs";
 
 const { golfers, coachGolfers, fittings } = schema;
 
@@ -99,10 +100,14 @@ export async function updateGolfer(actor: SignedInActor, id: string, input: z.in
   const { consent, ...fields } = input;
   // Consent already on record stays as recorded (its time and giver) unless withdrawn.
   const consentSet = consent?.given && current.videoConsentAt ? {} : consentColumns(consent);
-  const [row] = await db
-    .update(golfers)
-    .set({ ...fields, ...consentSet, updatedAt: new Date() })
-    .where(and(eq(golfers.id, id), eq(golfers.studioId, current.studioId)))
-    .returning();
-  return row!;
+  // A new handedness turns the reference directions of every clip of the golfer: all recomputed.
+  const handednessChanged = fields.handedness !== undefined && fields.handedness !== current.handedness;
+  return changeMeasureInput(async (tx) => {
+    const [row] = await tx
+      .update(golfers)
+      .set({ ...fields, ...consentSet, updatedAt: new Date() })
+      .where(and(eq(golfers.id, id), eq(golfers.studioId, current.studioId)))
+      .returning();
+    return row!;
+  }, handednessChanged ? clipsMeasuredWith.golfer(id) : null, actor.userId);
 }

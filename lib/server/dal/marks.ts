@@ -70,8 +70,12 @@ function markFields(m: MarkRow) {
   };
 }
 
+/** A mark as the API answers it: drawn fields, who placed it (hand or tracking) and its point precision. */
 function presentMark(m: MarkRow) {
-  return { id: m.id, clipId: m.clipId, ...markFields(m), authorUserId: m.authorUserId, version: m.version, createdAt: m.createdAt, updatedAt: m.updatedAt };
+  return {
+    id: m.id, clipId: m.clipId, ...markFields(m), source: m.source, precisionPx: m.precisionPx,
+    authorUserId: m.authorUserId, version: m.version, createdAt: m.createdAt, updatedAt: m.updatedAt,
+  };
 }
 
 // The statements every save runs are prepared once per process: building a query with joins
@@ -144,7 +148,8 @@ const updateBumped = bumpClip(true);
 const updateMarkAtVersion = db
   .with(updateBumped)
   .update(marks)
-  .set({ ...drawnColumns, version: sql`${marks.version} + 1`, updatedAt: sql`now()` })
+  // A proposal moved by hand becomes a hand mark: the fitter's placement, with a click's precision.
+  .set({ ...drawnColumns, source: "hand", precisionPx: null, version: sql`${marks.version} + 1`, updatedAt: sql`now()` })
   .where(thisMarkAtVersion(updateBumped))
   .returning()
   .prepare("mark_update");

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq, sql } from "drizzle-orm";
+import { and, eq, inArray, sql } from "drizzle-orm";
 import { db, schema } from "@/db";
 import type { StoredMark } from "@/lib/marks/types";
 import { computeMeasurements } from "@/lib/metrics/compute";
@@ -41,13 +41,14 @@ export function clipContext(row: MeasureSubject): ClipContext | null {
 }
 
 // Marks in drawing order (when two compete for one slot the computation takes the latest drawn),
-// as one JSON value: one row to parse instead of one per mark. Null sizes are left out.
+// as one JSON value: one row to parse instead of one per mark. Null sizes are left out. With
+// tracking turned off on the clip, its proposals are left out.
 const marksJson = sql<StoredMark[]>`coalesce((
   select json_agg(json_strip_nulls(json_build_object(
     'id', m.id, 'frame', m.frame, 'kind', m.kind, 'role', m.role, 'points', m.points,
     'lengthMm', m.length_mm, 'widthMm', m.width_mm, 'heightMm', m.height_mm,
     'source', m.source, 'precisionPx', m.precision_px)) order by m.created_at, m.id)
-  from ${marks} m where m.clip_id = ${clips.id}), '[]'::json)`;
+  from ${marks} m where m.clip_id = ${clips.id} and (m.source = 'hand' or ${clips.trackingEnabled})), '[]'::json)`;
 
 /**
  * The clip, what it is measured with, and its marks, read in one statement: one snapshot, so the
@@ -138,7 +139,7 @@ export async function refreshMeasurements(clipId: string, computedBy: string | n
 type Window = { min: number; max: number };
 type Row = typeof measurements.$inferSelect;
 
-/** A stored row back in the computation's shape (METRICS.md). */
+/** A stored row back in the computation's shape (docs/measurements.md). */
 function fromRow(r: Row): Measurement {
   if (r.value === null) return { key: r.key, value: null, unit: r.unit, needs: r.needs };
   const method = r.method === "tracked" || r.method === "mixed" ? r.method : "marked";
@@ -162,9 +163,32 @@ export async function listMeasurements(actor: SignedInActor, clipId: string) {
   const keys = METRICS_BY_VIEW[context.view].map((d) => d.key);
   const rows = keys.map((k) => stored.get(k)).filter((r): r is Row => r !== undefined && r.measureRevision === loaded.clip.measureRevision);
   if (rows.length === keys.length) return { measurements: presentMeasurements(rows.map(fromRow), loaded.settings.windows) };
-  // Nothing stored for the clip's current revision (never changed since processing, or a save
-  // stopped between its change and its recomputation): compute from the marks, store nothing.
-  const inputs = await readMeasureInputs(clipId);
-  const current = clipContext(inputs);
-  return { measurements: current ? presentMeasurements(computeMeasurements(current, inputs.marks), inputs.settings.windows) : [] };
+  // Nothing stored for the clip's current revision (an input changed and its recomputation was
+  // deferred, or a save stopped between its change and its recomputation): compute and store now.
+  return { measurements: await refreshMeasurements(clipId, null) };
+}
+
+/**
+ * The stored measurement rows of these clips that belong to each clip's current revision. A ready
+ * clip without a full current set (an input changed and its recomputation was deferred, or stopped)
+ * is recomputed and stored first: every list, comparison, CSV and export reads through here, so no
+ * row computed from an old input is ever shown.
+ */
+export async function currentMeasurementRows(clipIds: readonly string[]): Promise<Row[]> {
+  if (clipIds.length === 0) return [];
+  const read = () =>
+    db
+      .select({ row: measurements, clipId: clips.id, view: clips.view, measurable: sql<boolean>`${clips.frameCount} is not null` })
+      .from(measurements)
+      .rightJoin(clips, and(eq(clips.id, measurements.clipId), eq(measurements.measureRevision, clips.measureRevision)))
+      .where(inArray(clips.id, [...clipIds]));
+  const first = await read();
+  const current = new Map<string, number>();
+  for (const r of first) if (r.row) current.set(r.row.clipId, (current.get(r.row.clipId) ?? 0) + 1);
+  // The right join gives every clip one row at least; the unmeasured (not processed yet) are skipped.
+  const stale = [...new Map(first.map((r) => [r.clipId, r])).values()]
+    .filter((r) => r.measurable && (current.get(r.clipId) ?? 0) < METRICS_BY_VIEW[r.view].length);
+  if (stale.length === 0) return first.flatMap((r) => (r.row ? [r.row] : []));
+  for (const { clipId } of stale) await refreshMeasurements(clipId, null);
+  return (await read()).flatMap((r) => (r.row ? [r.row] : []));
 }

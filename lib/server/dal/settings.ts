@@ -3,6 +3,7 @@ import { eq } from "drizzle-orm";
 import { db, schema } from "@/db";
 import type { StudioSettings } from "@/db/schema";
 import type { StudioSettingsInput } from "@/lib/schemas/settings";
+import { changeMeasureInput, clipsMeasuredWith } from "./measure-inputs";
 import { assertStudio, type SignedInActor } from "../access";
 
 const { studios } = schema;
@@ -21,6 +22,11 @@ export async function getStudioSettings(actor: SignedInActor) {
 
 export async function updateStudioSettings(actor: SignedInActor, input: StudioSettingsInput) {
   assertStudio(actor, "studio.settings");
-  const [row] = await db.update(studios).set({ settings: input, updatedAt: new Date() }).where(eq(studios.id, actor.studioId)).returning({ settings: studios.settings });
-  return row!.settings;
+  const before = await settingsOfStudio(actor.studioId);
+  // Friction enters every face-on clip's skid: those are recomputed with the new value.
+  const frictionChanged = before.frictionMu !== input.frictionMu;
+  return changeMeasureInput(async (tx) => {
+    const [row] = await tx.update(studios).set({ settings: input, updatedAt: new Date() }).where(eq(studios.id, actor.studioId)).returning({ settings: studios.settings });
+    return row!.settings;
+  }, frictionChanged ? clipsMeasuredWith.studioFriction(actor.studioId) : null, actor.userId);
 }

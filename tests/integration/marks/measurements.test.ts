@@ -1,7 +1,7 @@
 /**
  * Marks drawn through the API on a clip whose truth is known (the synthetic overhead stroke
  * of tests/fixtures/generate-clips.ts), checked against that truth. The expected angles are
- * set by construction from explicit angles and plain trigonometry (METRICS.md, overhead
+ * set by construction from explicit angles and plain trigonometry (docs/measurements.md, overhead
  * view), so the API must give them back to 0.1°; ball speed = px per frame × mm per px
  * (ball diameter 42.67 mm, R&A/USGA Equipment Rules, Appendix III) × capture fps, to 1%.
  */
@@ -85,8 +85,8 @@ describe("measurements from marks on a clip with known truth", () => {
     expect(Math.abs(m.twist!.value!)).toBeLessThan(0.1); // the face keeps turning at the same rate: no twist from the strike
     expect(Math.abs(m.start_direction!.value! - options.startDirectionDeg)).toBeLessThan(0.1);
     expect(Math.abs(m.ball_speed!.value! / ballSpeed(240) - 1)).toBeLessThan(0.01);
-    expect(m.ball_speed).toMatchObject({ unit: "m/s", method: "derived" });
-    expect(m.face_angle_impact).toMatchObject({ unit: "deg", method: "derived", window: { min: -1, max: 1 } });
+    expect(m.ball_speed).toMatchObject({ unit: "m/s", method: "marked" });
+    expect(m.face_angle_impact).toMatchObject({ unit: "deg", method: "marked", window: { min: -1, max: 1 } });
     expect(m.face_angle_impact!.frames).toContain(impact);
     // The POST answers with the same values the GET reads back.
     expect(last.ball_speed!.value).toBe(m.ball_speed!.value);
@@ -98,7 +98,7 @@ describe("measurements from marks on a clip with known truth", () => {
     const aim = rows.find((r) => r.key === "aim")!;
     expect(aim.markIds).toHaveLength(2);
     expect(aim.computedBy).toBe(w.fitter.id);
-    expect(aim.method).toBe("derived");
+    expect(aim.method).toBe("marked");
   });
 
   it("recomputes on a capture fps change: ball speed scales with the capture rate, angles stay", async () => {
@@ -122,7 +122,7 @@ describe("measurements from marks on a clip with known truth", () => {
     expect(Math.abs((await measurements()).face_angle_impact!.value! - options.faceAngleImpactDeg)).toBeLessThan(0.1);
   });
 
-  it("mirrors the signs for a mirrored image (METRICS.md: r reverses)", async () => {
+  it("mirrors the signs for a mirrored image (docs/measurements.md: r reverses)", async () => {
     expect((await call(fitter, "PATCH", `/api/clips/${clipId}`, { mirrored: true })).status).toBe(200);
     const m = await measurements();
     expect(Math.abs(m.aim!.value! + options.faceAngleAddressDeg)).toBeLessThan(0.1);

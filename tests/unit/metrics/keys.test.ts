@@ -18,7 +18,7 @@ describe("metric keys for the screens", () => {
     expect(keysAndUnits("down-the-line")).toEqual([["sole_tilt_impact", "deg"], ["lie_change", "deg"]]);
     expect(METRICS_BY_VIEW.overhead.find((d) => d.key === "path")?.label).toBe("Path");
   });
-  it("carries the sign words of METRICS.md, with start direction mirrored for a left-hander", () => {
+  it("carries the sign words of docs/measurements.md, with start direction mirrored for a left-hander", () => {
     expect(signWordsFor("overhead", "face_angle_impact", "right")).toEqual({ positive: "open", negative: "closed" });
     expect(signWordsFor("overhead", "path", "left")).toEqual({ positive: "in-to-out", negative: "out-to-in" });
     expect(signWordsFor("overhead", "start_direction", "left")).toEqual({ positive: "left of target", negative: "right of target" });
@@ -29,7 +29,7 @@ describe("metric keys for the screens", () => {
 });
 
 describe("display rounding", () => {
-  it("shows angles to 0.1° (METRICS.md) without a negative zero", () => {
+  it("shows angles to 0.1° (docs/measurements.md) without a negative zero", () => {
     expect(formatMeasurement(-0.6123, "deg")).toBe("-0.6");
     expect(formatMeasurement(-0.04, "deg")).toBe("0.0");
     expect(formatMeasurement(287.6, "rpm")).toBe("288");
