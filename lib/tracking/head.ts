@@ -165,7 +165,17 @@ export function findHeadEdge(frame: GreyImage, background: GreyImage, search: He
   // The leading edge runs across the travel direction; otherwise this is not a head's front.
   if (Math.abs(dirAcross) < 0.7) return null;
   const tAt = (s: number) => (s - across(...edge.centre)) / dirAcross;
-  const tMid = tAt(sMid);
+  // The middle of the body measured along the edge itself, so that a travel direction a few
+  // degrees off does not slide the point along the edge.
+  let tw = 0, twt = 0;
+  for (const m of mask) {
+    const bin = Math.floor(across(m.x, m.y));
+    if (bin < b0 || bin > b1) continue;
+    const c = Math.min(1, m.d / contrast);
+    tw += c;
+    twt += c * ((m.x - edge.centre[0]) * edge.direction[0] + (m.y - edge.centre[1]) * edge.direction[1]);
+  }
+  const tMid = twt / tw;
   const point = pointOnLine(edge, tMid);
   const tEnds = [tAt(b0 + trim), tAt(b1 - trim + 1)] as const;
   const ends: [Vec2, Vec2] = [pointOnLine(edge, tEnds[0]), pointOnLine(edge, tEnds[1])];

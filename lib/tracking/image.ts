@@ -51,3 +51,24 @@ export function robustStd(values: number[]): number {
   const m = median(values);
   return 1.4826 * median(values.map((v) => Math.abs(v - m)));
 }
+
+/**
+ * Per-pixel median of same-sized crops: the background of a region through which something moved,
+ * as long as it covered each pixel in fewer than half of them.
+ */
+export function medianOfCrops(crops: readonly Uint8Array[], size: number): Uint8Array {
+  const out = new Uint8Array(size);
+  const values = new Uint8Array(crops.length);
+  const counts = new Uint16Array(256);
+  const half = crops.length >> 1;
+  for (let i = 0; i < size; i++) {
+    for (let c = 0; c < crops.length; c++) values[c] = crops[c]![i]!;
+    // Counting sort over 256 levels: linear in the number of crops.
+    counts.fill(0);
+    for (let c = 0; c < crops.length; c++) counts[values[c]!]!++;
+    let seen = 0, level = 0;
+    while (seen + counts[level]! <= half) seen += counts[level++]!;
+    out[i] = level;
+  }
+  return out;
+}

@@ -14,7 +14,7 @@ import type { Vec2 } from "@/lib/geometry/vector";
 import type { View } from "@/lib/marks/types";
 import { fitBall, type BallFit } from "@/lib/tracking/ball";
 import { changedCentroid, findHeadEdge, findShaftLine, headSign, type HeadSearch } from "@/lib/tracking/head";
-import { boxAround, robustStd, type GreyImage, type PixelBox } from "@/lib/tracking/image";
+import { boxAround, cropImage, median, medianOfCrops, robustStd, type GreyImage, type PixelBox } from "@/lib/tracking/image";
 import { findMarker } from "@/lib/tracking/marker";
 import { addressFromStillness, impactFromBall, refineAddress, restJitter } from "@/lib/tracking/moments";
 import type { Proposal, TrackingResult } from "@/lib/tracking/types";
@@ -31,6 +31,8 @@ const HEAD_REACH_RADII = 8;
 const CHANGE_STRIDE = 2;
 /** still frames kept for the address (it may turn out a few frames before the still run's end) */
 const STILL_KEPT = 16;
+/** crops of the head region kept for its background (thinned to every other one when full) */
+const CROPS_KEPT = 48;
 
 type Candidate = {
   rest: BallFit;
@@ -41,8 +43,9 @@ type Candidate = {
   stillThreshold: number;
   still: Map<number, Uint8Array>;
   stillRunStart: number;
-  background: Uint8Array | null;
-  mostChanged: number;
+  /** the head region every `cropStep` frames, for the background (the head moves, turf stays) */
+  crops: { frame: number; data: Uint8Array }[];
+  cropStep: number;
   address: { frame: number; image: Uint8Array } | null;
 };
 
@@ -108,7 +111,7 @@ export class ClipTracker {
       // Still: fewer changed samples than a sliver of the head would make (0.2 % of the region).
       return {
         rest, box, displacement: [0], changed: [0], meanChange: [0], stillThreshold: Math.max(6, sampled * 0.002),
-        still: new Map([[0, data.slice()]]), stillRunStart: 0, background: null, mostChanged: -1, address: null,
+        still: new Map([[0, data.slice()]]), stillRunStart: 0, crops: [], cropStep: 1, address: null,
       };
     });
   }
@@ -165,9 +168,12 @@ export class ClipTracker {
         const frame = refineAddress(c.meanChange, Math.max(c.stillRunStart, index - STILL_KEPT + 1), index);
         c.address = { frame, image: c.still.get(frame)! };
       }
-      if (changed > c.mostChanged) {
-        c.mostChanged = changed;
-        c.background = data.slice();
+      if (index % c.cropStep === 0) {
+        c.crops.push({ frame: index, data: cropImage(image, c.box).data });
+        if (c.crops.length > CROPS_KEPT) {
+          c.cropStep *= 2;
+          c.crops = c.crops.filter((crop) => crop.frame % c.cropStep === 0);
+        }
       }
       const k = impactFromBall(c.displacement, restJitter(c.displacement));
       if (k !== null && (!earliest || k < earliest.k)) earliest = { c, k };
@@ -180,9 +186,38 @@ export class ClipTracker {
     for (let f = earliest.k + 1; f <= index && !this.trackEnded; f++) this.followBall(this.fromRing(f)!, f);
   }
 
+  /**
+   * The head region without the head: the per-pixel median of frames between address and impact
+   * (the head passes through, the turf stays), pasted into the first frame.
+   */
+  private backgroundFor(c: Candidate, k: number): GreyImage | null {
+    const from = c.address?.frame ?? 0;
+    const between = c.crops.filter((crop) => crop.frame > from && crop.frame <= k);
+    // The half in which most changed near the ball: the head away from its address spot, where
+    // it must be seen near impact (a short backswing leaves the head over part of that spot).
+    const cut = median(between.map((crop) => c.changed[crop.frame]!));
+    const moving = between.filter((crop) => c.changed[crop.frame]! >= cut);
+    if (moving.length < 3) return null;
+    const { box } = c;
+    const width = box.x1 - box.x0;
+    const turf = medianOfCrops(moving.map((crop) => crop.data), width * (box.y1 - box.y0));
+    const data = this.first!.slice();
+    for (let y = box.y0; y < box.y1; y++) data.set(turf.subarray((y - box.y0) * width, (y - box.y0 + 1) * width), y * this.width + box.x0);
+    return this.image(data);
+  }
+
+  private launchDirection(c: Candidate, k: number): Vec2 | null {
+    for (let f = k + 3; f > k; f--) {
+      const data = this.fromRing(f);
+      const fit = data ? fitBall(this.image(data), { x: c.rest.x, y: c.rest.y, r: c.rest.r }) : null;
+      if (fit && Math.hypot(fit.x - c.rest.x, fit.y - c.rest.y) >= 1) return [fit.x - c.rest.x, fit.y - c.rest.y];
+    }
+    return null;
+  }
+
   private measureHead(c: Candidate, k: number): void {
-    if (!c.background) return void this.notes.push("No frame without the head near the ball: no clubhead, face or shaft proposals.");
-    const background = this.image(c.background);
+    const background = this.backgroundFor(c, k);
+    if (!background) return void this.notes.push("Too few frames between address and impact to see the turf without the head: no clubhead, face or shaft proposals.");
     const impactData = this.fromRing(k)!;
     const sign = headSign(this.image(impactData), background, c.box, this.threshold);
     const base = { box: c.box, sign, threshold: this.threshold };
@@ -190,9 +225,11 @@ export class ClipTracker {
     const atImpact = changedCentroid(this.image(impactData), background, base);
     const atStart = changedCentroid(this.image(this.fromRing(earliestFrame)!), background, base);
     if (!atImpact) return void this.notes.push("The head was not found near the ball at impact.");
-    const ball: Vec2 = [c.rest.x, c.rest.y];
+    // The head travels about where it sends the ball (start direction and path differ by a few
+    // degrees); the ball's first frames after impact are in the ring. Otherwise: the head's own motion.
+    const launched = this.launchDirection(c, k);
     const moved = atStart ? Math.hypot(atImpact[0] - atStart[0], atImpact[1] - atStart[1]) : 0;
-    const raw: Vec2 = atStart && moved >= 2 ? [atImpact[0] - atStart[0], atImpact[1] - atStart[1]] : [ball[0] - atImpact[0], ball[1] - atImpact[1]];
+    const raw: Vec2 = launched ?? (atStart && moved >= 2 ? [atImpact[0] - atStart[0], atImpact[1] - atStart[1]] : [c.rest.x - atImpact[0], c.rest.y - atImpact[1]]);
     const norm = Math.hypot(raw[0], raw[1]);
     if (!(norm > 0)) return void this.notes.push("The head's direction of travel could not be found.");
     const search: HeadSearch = { ...base, towards: [raw[0] / norm, raw[1] / norm], noise: this.noise };
