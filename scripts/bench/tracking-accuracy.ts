@@ -21,7 +21,7 @@ import type { StoredMark } from "@/lib/marks/types";
 import { computeMeasurements } from "@/lib/metrics/compute";
 import type { ClipContext } from "@/lib/metrics/types";
 import type { TrackingResult } from "@/lib/tracking/types";
-import { generateClip, type AnyClipOptions, type AnyClipTruth, type ClipView, type Faults } from "@/tests/fixtures/generate-clips";
+import { generateClip, random, type AnyClipOptions, type AnyClipTruth, type ClipView, type Faults } from "@/tests/fixtures/generate-clips";
 import { trackClipFile } from "@/workers/tracking/track-clip";
 
 const CLIPS = Number(process.env.BENCH_TRACKING_CLIPS ?? 50);
@@ -57,20 +57,9 @@ const MIXES: { name: string; faults: Faults; fps?: number }[] = [
 ];
 const VIEWS: ClipView[] = ["overhead", "face-on", "down-the-line"];
 
-/** Deterministic pseudo-random numbers (mulberry32), so every run draws the same clips. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 type Plan = { index: number; mix: (typeof MIXES)[number]; options: AnyClipOptions };
 
+/** The same clips on every run of a seed. */
 function plan(count: number, seed: number): Plan[] {
   const rnd = random(seed);
   const between = (a: number, b: number) => Math.round((a + (b - a) * rnd()) * 100) / 100;
