@@ -25,7 +25,8 @@ export type SpecData = {
   build: SpecBuild;
   buildShop: BuildShop;
   swingWeight: { points: number; letterFromMemory: string | null; method: string } | null;
-  keyMeasurements: (Pick<KeyStats, "key" | "label" | "unit" | "window"> & KeyStats["summary"])[];
+  /** meanUncertainty (standard error of the mean) and noise (a putt's own ±): absent on specs issued before them. */
+  keyMeasurements: (Pick<KeyStats, "key" | "label" | "unit" | "window"> & KeyStats["summary"] & Partial<Pick<KeyStats, "meanUncertainty" | "noise">>)[];
   makeChances: { distanceFt: number; probability: number | null }[];
   notes: string;
   warnings: RuleWarning[];
@@ -73,7 +74,7 @@ export function freezeSpec(input: FreezeInput): SpecData {
     swingWeight,
     keyMeasurements: SPEC_KEYS.flatMap((key) => {
       const s = stats.find((x) => x.key === key);
-      return s ? [{ key: s.key, label: s.label, unit: s.unit, window: s.window, ...s.summary }] : [];
+      return s ? [{ key: s.key, label: s.label, unit: s.unit, window: s.window, ...s.summary, meanUncertainty: s.meanUncertainty, noise: s.noise }] : [];
     }),
     makeChances: (input.comparison?.make ?? []).map((m) => ({ distanceFt: m.distanceFt, probability: m.probability })),
     notes: input.notes,

@@ -1,4 +1,6 @@
+import { windowText } from "@/lib/review/readout";
 import { percent, signedDeg } from "./format";
+import { metricDefinition } from "./metric-labels";
 import type { SpecData } from "./spec-data";
 
 export type SpecSection = { title: string; rows: [string, string][] };
@@ -7,6 +9,15 @@ const num = (v: number | null, unit: string, digits = 2) => (v === null ? "—" 
 const text = (v: string) => (v.trim() === "" ? "—" : v);
 const valueOf = (v: number, unit: string) => (unit === "deg" ? signedDeg(v) : `${v.toFixed(2)} ${unit}`);
 const spreadOf = (v: number, unit: string) => (unit === "deg" ? `${v.toFixed(1)}°` : `${v.toFixed(2)} ${unit}`);
+/** ± one standard error at the value's decimals; below the last digit "±<0.1°" (never a claimed ±0.0). */
+const plusMinusOf = (u: number | null | undefined, unit: string) => {
+  if (u == null || !Number.isFinite(u)) return "";
+  const digits = unit === "deg" ? 1 : 2;
+  const shown = Number(u.toFixed(digits)) > 0 ? u.toFixed(digits) : `<${(10 ** -digits).toFixed(digits)}`;
+  return ` ±${shown}${unit === "deg" ? "°" : ` ${unit}`}`;
+};
+const windowOf = (m: SpecData["keyMeasurements"][number]) =>
+  m.window ? ` (${windowText(m.window, m.unit, metricDefinition(m.key).signWords !== null)})` : "";
 
 const leanText = (deg: number) => (deg === 0 ? "0°" : `${Number(Math.abs(deg).toFixed(1))}° ${deg > 0 ? "forward" : "back"}`);
 
@@ -40,7 +51,9 @@ export function specLines(spec: SpecData) {
       title: `Measured with this build (${spec.build.label})`,
       rows: spec.keyMeasurements.map((m) => [
         m.label,
-        `mean ${valueOf(m.mean, m.unit)}${m.sd === null ? "" : `, spread ${spreadOf(m.sd, m.unit)}`}, ${m.n} putts${m.shareInWindow === null ? "" : `, ${percent(m.shareInWindow)} in window`}`,
+        `mean ${valueOf(m.mean, m.unit)}${plusMinusOf(m.meanUncertainty, m.unit)}${m.sd === null ? "" : `, spread ${spreadOf(m.sd, m.unit)}`}` +
+          `${m.noise == null ? "" : `, each putt${plusMinusOf(m.noise, m.unit)}`}, ${m.n} putts` +
+          `${m.shareInWindow === null ? "" : `, ${percent(m.shareInWindow)} in window${windowOf(m)}`}`,
       ]),
     });
   }
