@@ -25,6 +25,8 @@ const cases: MatrixCase<W>[] = [
   { route: "GET /api/clips/{id}", request: (w, t) => ({ method: "GET", path: clipPath(w, t) }), expect: readGolfer },
   { route: "PATCH /api/clips/{id}", request: (w, t) => ({ method: "PATCH", path: clipPath(w, t), body: { captureFps: 240 } }), expect: writeGolfer(200) },
   { route: "PUT /api/clips/{id}/moments", request: (w, t) => ({ method: "PUT", path: `${clipPath(w, t)}/moments`, body: { impact: 300 } }), expect: writeGolfer(200) },
+  { route: "POST /api/clips/{id}/proposals/accept", request: (w, t) => ({ method: "POST", path: `${clipPath(w, t)}/proposals/accept`, body: {} }), expect: writeGolfer(200) },
+  { route: "POST /api/clips/{id}/tracking", request: (w, t) => ({ method: "POST", path: `${clipPath(w, t)}/tracking` }), expect: writeGolfer(200) },
   { route: "GET /api/clips/{id}/measurements", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/measurements` }), expect: readGolfer },
   { route: "GET /api/clips/{id}/marks", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/marks` }), expect: readGolfer },
   {
@@ -56,7 +58,9 @@ const cases: MatrixCase<W>[] = [
 ];
 
 runMatrix("marks", cases, async (w) => {
-  const clips = { own: await insertClip(w.own), sibling: await insertClip(w.sibling), other: await insertClip(w.other) };
+  // A tracker's summary, as the worker leaves it, so that its proposals can be accepted.
+  const tracking = { version: 1, ballFound: true, addressFrame: 40, impactFrame: 300, impactSource: "ball" };
+  const clips = { own: await insertClip(w.own, { tracking }), sibling: await insertClip(w.sibling, { tracking }), other: await insertClip(w.other, { tracking }) };
   const coachMark = await insertMark(clips.own, w.coach.id);
   return { ...w, clips, coachMarkId: coachMark.id };
 });

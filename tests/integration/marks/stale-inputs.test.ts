@@ -48,7 +48,7 @@ describe("a changed input recomputes every value built on it", () => {
     const clip = await call(fitter, "GET", `/api/clips/${overheadId}`);
     expect(clip.body.handedness).toBe("left");
     const comparison = await call(fitter, "GET", `/api/fittings/${w.own.fitting.id}/comparison`);
-    const face = comparison.body.comparison.builds.flatMap((b: { stats: { key: string; summary: { mean: number } }[] }) => b.stats).find((s: { key: string }) => s.key === "face_angle_impact");
+    const face = comparison.body.builds.flatMap((b: { stats: { key: string; summary: { mean: number } }[] }) => b.stats).find((s: { key: string }) => s.key === "face_angle_impact");
     expect(face.summary.mean).toBeCloseTo(-2, 6);
     const csv = await call(fitter, "GET", `/api/fittings/${w.own.fitting.id}/csv`);
     const line = String(csv.body).split("\r\n").find((l: string) => l.includes(overheadId) && l.includes("face_angle_impact"))!;

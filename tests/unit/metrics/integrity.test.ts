@@ -73,7 +73,8 @@ describe("a handedness flip changes every overhead sign at once", () => {
 });
 
 
-describe("uncertainty, against a hand propagation", () => {
+// Many Monte Carlo runs, so that the figure is within a few per cent of the analytic one.
+describe("uncertainty, against a hand propagation", { timeout: 30_000 }, () => {
   it("start direction from six hand-clicked ball points 8 px apart and a 500 px target line, 1 px per click", () => {
     // Slope of a least-squares line with perpendicular noise σ: σ_θ = σ / √Σ(dᵢ − d̄)² (J. R. Taylor,
     // An Introduction to Error Analysis, 2nd ed., §8.4). Points at 8…48 px: Σ(dᵢ − d̄)² = 64 × 17.5 = 1120,
@@ -81,14 +82,14 @@ describe("uncertainty, against a hand propagation", () => {
     // Together √(1.7121² + 0.16206²) = 1.7197°.
     const marks = overheadMarks({ aimDeg: 0, faceDeg: 0, pathDeg: 0, startDeg: 0, rotationPerFrameDeg: 0, twistDeg: 0, ballStepPx: 8 })
       .map((m) => (m.role === "target" ? { ...m, points: [[0, 0], [0, -500]] as [number, number][] } : m));
-    const start = computeMeasurements(overheadClip(), marks, { monteCarloRuns: 4000 }).find((m) => m.key === "start_direction") as { uncertainty: number };
+    const start = computeMeasurements(overheadClip(), marks, { monteCarloRuns: 2000 }).find((m) => m.key === "start_direction") as { uncertainty: number };
     expect(start.uncertainty).toBeGreaterThan(1.7197 * 0.95);
     expect(start.uncertainty).toBeLessThan(1.7197 * 1.05);
   });
   it("tracked points with a tighter stated precision give a proportionally smaller uncertainty", () => {
     const marks = overheadMarks({ aimDeg: 0, faceDeg: 0, pathDeg: 0, startDeg: 0, rotationPerFrameDeg: 0, twistDeg: 0, ballStepPx: 8 })
       .map((m) => (m.role === "ball" ? { ...m, source: "tracked" as const, precisionPx: 0.1 } : m.role === "target" ? { ...m, points: [[0, 0], [0, -500]] as [number, number][] } : m));
-    const start = computeMeasurements(overheadClip(), marks, { monteCarloRuns: 4000 }).find((m) => m.key === "start_direction") as { uncertainty: number; method: string };
+    const start = computeMeasurements(overheadClip(), marks, { monteCarloRuns: 2000 }).find((m) => m.key === "start_direction") as { uncertainty: number; method: string };
     // √(0.17121² + 0.16206²) = 0.2357°.
     expect(start.uncertainty).toBeGreaterThan(0.2357 * 0.95);
     expect(start.uncertainty).toBeLessThan(0.2357 * 1.05);
