@@ -13,6 +13,7 @@
  * BENCH_TRACKING_CLIPS=12 for a quicker look; BENCH_TRACKING_SEED to draw another set;
  * BENCH_TRACKING_VERBOSE=1 prints every clip.
  */
+import { execFileSync } from "node:child_process";
 import { mkdtemp, rm } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
@@ -169,9 +170,20 @@ function quantiles(values: number[]): { median: number; p95: number } {
   return sorted.length ? { median: quantileSorted(sorted, 0.5), p95: quantileSorted(sorted, 0.95) } : { median: NaN, p95: NaN };
 }
 
+/** The last commit that touched the tracker, so a figure can be matched to its code. */
+function trackerVersion(): string {
+  try {
+    const commit = execFileSync("git", ["log", "-1", "--format=%h", "--", "workers/tracking", "lib/tracking"], { encoding: "utf8" }).trim();
+    const edited = execFileSync("git", ["status", "--porcelain", "--", "workers/tracking", "lib/tracking"], { encoding: "utf8" }).trim();
+    return `${commit}${edited ? " (with uncommitted edits)" : ""}`;
+  } catch {
+    return "unknown (no git)";
+  }
+}
+
 function report(results: ClipResult[], wallSeconds: number): void {
   const rows = results.flatMap((r) => r.rows);
-  console.log(`tracking accuracy: ${results.length} seeded clips (seed ${SEED}), ${VIEWS.length} views, ${MIXES.length} fault mixes`);
+  console.log(`tracking accuracy: ${results.length} seeded clips (seed ${SEED}), ${VIEWS.length} views, ${MIXES.length} fault mixes; tracker at ${trackerVersion()}`);
   console.log("  metric per view                n  missing  median |err|  p95 |err|  median ±  within ±   goal   verdict (on p95)");
   for (const view of VIEWS) {
     const viewResults = results.filter((r) => r.truth.view === view);
