@@ -85,6 +85,40 @@ function bodyRun(across: number[]): [number, number] | null {
 
 export const MIN_HEAD_PIXELS = 40;
 
+/** Depths inside the leading edge (px) at which the head's two ends are looked for. */
+const END_DEPTHS = [1, 1.5, 2, 2.5, 3];
+
+/**
+ * The head's two ends along its leading edge. `profile(t, depth)`: coverage at position t along the
+ * edge, `depth` px behind it; [tA, tB] is the rough extent. Per depth, each end is where the
+ * coverage crosses ½ marching inward from 6 px outside; the middle is their mean over depths, its
+ * standard error from their scatter (at least a pixel's 1/√12 over the number of depths).
+ */
+function headEnds(profile: (t: number, depth: number) => number, tA: number, tB: number): { middle: number; stdErr: number } | null {
+  const lo = Math.min(tA, tB), hi = Math.max(tA, tB);
+  const crossing = (from: number, to: number, depth: number): number | null => {
+    const step = from < to ? 0.25 : -0.25;
+    let prev = profile(from, depth);
+    if (!(prev < 0.5)) return null;
+    for (let t = from + step; step > 0 ? t <= to : t >= to; t += step) {
+      const c = profile(t, depth);
+      if (Number.isNaN(c)) return null;
+      if (c >= 0.5) return t - step * ((c - 0.5) / (c - prev));
+      prev = c;
+    }
+    return null;
+  };
+  const middles: number[] = [];
+  for (const depth of END_DEPTHS) {
+    const a = crossing(lo - 6, (lo + hi) / 2, depth), b = crossing(hi + 6, (lo + hi) / 2, depth);
+    if (a !== null && b !== null && b - a > 0.5 * (hi - lo)) middles.push((a + b) / 2);
+  }
+  if (middles.length < 3) return null;
+  const middle = middles.reduce((x, v) => x + v, 0) / middles.length;
+  const sd = Math.sqrt(middles.reduce((x, v) => x + (v - middle) ** 2, 0) / (middles.length - 1));
+  return { middle, stdErr: Math.max(sd, 1 / Math.sqrt(12)) / Math.sqrt(middles.length) };
+}
+
 /**
  * The edge at the half level between this line's own outside (2 px out) and inside (2.5 px in):
  * the background's texture makes the head's contrast differ from place to place, and a global
@@ -165,22 +199,32 @@ export function findHeadEdge(frame: GreyImage, background: GreyImage, search: He
   // The leading edge runs across the travel direction; otherwise this is not a head's front.
   if (Math.abs(dirAcross) < 0.7) return null;
   const tAt = (s: number) => (s - across(...edge.centre)) / dirAcross;
-  // The middle of the body measured along the edge itself, so that a travel direction a few
-  // degrees off does not slide the point along the edge.
-  let tw = 0, twt = 0;
-  for (const m of mask) {
-    const bin = Math.floor(across(m.x, m.y));
-    if (bin < b0 || bin > b1) continue;
-    const c = Math.min(1, m.d / contrast);
-    tw += c;
-    twt += c * ((m.x - edge.centre[0]) * edge.direction[0] + (m.y - edge.centre[1]) * edge.direction[1]);
+  // The middle of the leading edge: half way between the head's two ends (heel and toe overhead,
+  // sole and top line face-on), each found sub-pixel where the coverage crosses ½ along lines
+  // parallel to the edge just inside the head. Those ends move with the head whatever its turn;
+  // the middle of the thresholded body is the fallback.
+  const headEndsFound = headEnds((t, depth) => coverage(edge.centre[0] + edge.direction[0] * t - d[0] * depth, edge.centre[1] + edge.direction[1] * t - d[1] * depth), tAt(b0), tAt(b1 + 1));
+  let tMid: number, sMidSpread: number;
+  if (headEndsFound) {
+    tMid = headEndsFound.middle;
+    sMidSpread = headEndsFound.stdErr;
+  } else {
+    let tw = 0, twt = 0;
+    for (const m of mask) {
+      const bin = Math.floor(across(m.x, m.y));
+      if (bin < b0 || bin > b1) continue;
+      const c = Math.min(1, m.d / contrast);
+      tw += c;
+      twt += c * ((m.x - edge.centre[0]) * edge.direction[0] + (m.y - edge.centre[1]) * edge.direction[1]);
+    }
+    tMid = twt / tw;
+    sMidSpread = sMidErr;
   }
-  const tMid = twt / tw;
   const point = pointOnLine(edge, tMid);
   const tEnds = [tAt(b0 + trim), tAt(b1 - trim + 1)] as const;
   const ends: [Vec2, Vec2] = [pointOnLine(edge, tEnds[0]), pointOnLine(edge, tEnds[1])];
   // Floors: the sub-pixel edge interpolation's own bias on a sampled profile (0.05 px).
-  const pointPrecisionPx = Math.hypot(lineStdErrAt(edge, tMid), sMidErr, 0.05);
+  const pointPrecisionPx = Math.hypot(lineStdErrAt(edge, tMid), sMidSpread, 0.05);
   const linePrecisionPx = Math.hypot(Math.max(lineStdErrAt(edge, tEnds[0]), lineStdErrAt(edge, tEnds[1])), 0.05);
   return { edge, point, pointPrecisionPx, ends, linePrecisionPx, centroid, pixels: mask.length, contrast, body: [b0, b1 + 1] };
 }
