@@ -18,7 +18,7 @@ type Output = z.output<typeof buildFieldsSchema>;
 export function BuildForm({ fittingId, first }: { fittingId: string; first: boolean }) {
   const router = useRouter();
   const [status, setStatus] = useState<string | null>(null);
-  const { register, handleSubmit, setError, reset, control, formState } = useForm<Input, unknown, Output>({
+  const { register, handleSubmit, setError, reset, setValue, control, formState } = useForm<Input, unknown, Output>({
     resolver: zodResolver(buildFieldsSchema),
     defaultValues: { label: first ? "Own putter" : "", isBaseline: first },
   });
@@ -26,7 +26,10 @@ export function BuildForm({ fittingId, first }: { fittingId: string; first: bool
     setStatus(null);
     try {
       const build = await apiFetch<{ label: string; warnings: { message: string }[] }>(`/api/fittings/${fittingId}/builds`, { method: "POST", body: values });
+      // The other fields keep what was typed (the next build is usually a variant); the grip count is
+      // set again so that the two-grip fields shown agree with the select.
       reset({ label: "", isBaseline: false });
+      setValue("gripCount", values.gripCount ?? 1);
       setStatus(`Added ${build.label}.${build.warnings.length ? ` Check the equipment rules: ${build.warnings.map((w) => w.message).join(" ")}` : ""}`);
       router.refresh();
     } catch (e) {

@@ -55,7 +55,7 @@ export function equipmentWarnings(build: BuildForRules): RuleWarning[] {
       warnings.push({ field: "gripsCircular", message: "Two grips must each be circular in cross-section.", rule: "Equipment Rules, Part 2, 3c (a putter's two grips each circular in cross-section)" });
     }
     if (gripGapIn != null && gripGapIn < LIMITS.minGripGapIn) {
-      warnings.push({ field: "gripGapIn", message: `Grips ${gripGapIn} in apart are closer than the 1.5 in that makes them two grips.`, rule: "Equipment Rules, Part 2, 3c (a putter's two grips at least 1.5 in apart)" });
+      warnings.push({ field: "gripGapIn", message: `Grips ${gripGapIn} in apart: two grips need at least 1.5 in of shaft between them.`, rule: "Equipment Rules, Part 2, 3c (a putter's two grips at least 1.5 in apart)" });
     }
   }
   return warnings;
