@@ -2,18 +2,21 @@
 import { ROLE_LOOK } from "@/components/review/roles-look";
 import type { MarkRole } from "@/lib/marks/types";
 
-export type PlayerMark = { id: string; frame: number; kind: string; role: MarkRole | string; points: [number, number][] };
+/** `proposal`: a tracked mark the fitter has not accepted yet, drawn quieter (LOOK.md, "Proposals"). */
+export type PlayerMark = { id: string; frame: number; kind: string; role: MarkRole | string; points: [number, number][]; proposal?: boolean };
 type Transform = { scale: number; offsetX: number; offsetY: number; ratio: number };
 
 const lookOf = (role: string) => ROLE_LOOK[role as MarkRole] ?? { colour: "#FFFFFF", letter: "?", label: role };
 
-function handle(ctx: CanvasRenderingContext2D, x: number, y: number, colour: string, letter: string | null, ratio: number) {
+function handle(ctx: CanvasRenderingContext2D, x: number, y: number, colour: string, letter: string | null, ratio: number, hollow: boolean) {
   ctx.beginPath();
   ctx.arc(x, y, 5 * ratio, 0, Math.PI * 2);
-  ctx.fillStyle = colour;
-  ctx.fill();
+  if (!hollow) {
+    ctx.fillStyle = colour;
+    ctx.fill();
+  }
   ctx.lineWidth = 1.5 * ratio;
-  ctx.strokeStyle = "#0E1A24";
+  ctx.strokeStyle = hollow ? colour : "#0E1A24";
   ctx.stroke();
   if (letter) {
     ctx.font = `600 ${10 * ratio}px system-ui, sans-serif`;
@@ -33,7 +36,8 @@ export function drawMarks(ctx: CanvasRenderingContext2D, marks: { mark: PlayerMa
   for (const { mark, opacity } of marks) {
     const { colour, letter } = lookOf(mark.role);
     const pts = mark.points.map(at);
-    ctx.globalAlpha = opacity;
+    ctx.globalAlpha = opacity * (mark.proposal ? 0.65 : 1);
+    ctx.setLineDash(mark.proposal ? [6 * t.ratio, 4 * t.ratio] : []);
     if (pts.length >= 2) {
       ctx.beginPath();
       ctx.moveTo(...pts[0]!);
@@ -43,7 +47,8 @@ export function drawMarks(ctx: CanvasRenderingContext2D, marks: { mark: PlayerMa
       ctx.strokeStyle = colour;
       ctx.stroke();
     }
-    pts.forEach((p, i) => handle(ctx, p[0], p[1], colour, i === 0 ? letter : null, t.ratio));
+    ctx.setLineDash([]);
+    pts.forEach((p, i) => handle(ctx, p[0], p[1], colour, i === 0 ? letter : null, t.ratio, mark.proposal === true));
   }
   ctx.globalAlpha = 1;
 }

@@ -38,7 +38,7 @@ const isGhost = (m: ReviewMark, frame: number) =>
 export function ReviewScreen({ clip }: { clip: ReviewClip }) {
   const store = useMemo(() => new FrameStore(clip.id, clip.frameCount, clip.width, clip.height), [clip.id, clip.frameCount, clip.width, clip.height]);
   const marks = useMarks(clip.id);
-  const { moments, setMoment, replaceMoments } = useMoments(clip.id, clip.moments, marks.report);
+  const { moments, setMoment, replaceMoments } = useMoments(clip.id, clip.moments, marks);
   const tracking = useTracking(clip, { reloadMarks: marks.reload, replaceMoments, report: marks.report });
   const [frame, setFrame] = useState(() => clampFrame(clip.moments.address ?? 0, clip.frameCount));
   const [toolState, setToolState] = useState<ToolState>(() => idle("select"));
@@ -92,7 +92,7 @@ export function ReviewScreen({ clip }: { clip: ReviewClip }) {
         const n = moments[c.moment] ?? (c.moment === "impact" ? tracking.suggestedImpact : null);
         return n === null ? marks.report(`No ${c.moment} frame yet: press Shift+${c.moment === "address" ? "A" : "I"} on it.`) : goTo(n);
       }
-      case "setMoment": return void setMoment(c.moment, frame);
+      case "setMoment": return setMoment(c.moment, frame);
       case "zoom": return c.by === "fit" ? setUserViewport(null) : zoom(c.by === "in" ? 1.25 : 0.8);
       case "undo": return marks.undo();
       case "redo": return marks.redo();

@@ -149,6 +149,12 @@ export function useMarks(clipId: string) {
     report: (text: string) => setNotice({ tone: "error", text }),
     /** After a change made elsewhere (tracking accepted or run again): the server's marks, queued behind pending saves. */
     reload: () => enqueue(reload),
+    /**
+     * Runs another write that changes the measurements (a moment) in the same queue, so replies
+     * arrive in the order the edits were made and an older answer never replaces a newer one.
+     * `work` handles its own errors.
+     */
+    inTurn: (work: () => Promise<void>) => enqueue(work),
     create,
     update,
     destroy,

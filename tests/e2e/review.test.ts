@@ -1,9 +1,11 @@
 // The clip review screen in Chromium on a ready clip with real frames: draw the target line and
 // the face at address and impact, read the true angles with their ±, undo/redo through the API,
-// a stale edit from a second tab gets the conflict message, and a ground plane clicked in Z order is
-// refused with the server's words.
+// a stale edit from a second tab gets the conflict message, a ground plane clicked in Z order is
+// refused with the server's words, and T accepts the tracker's proposals.
 import type { Browser, BrowserContext, Page } from "playwright-core";
+import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { db, schema } from "@/db";
 import type { Vec2 } from "@/lib/geometry/vector";
 import { imageToScreen, type Viewport } from "@/lib/review/viewport";
 import { launchBrowser, submitSignIn } from "../support/browser";
@@ -224,6 +226,38 @@ describe("clip review", () => {
     expect(await dialog.textContent()).toContain("Accept the tracked marks");
     await page.keyboard.press("Escape");
     await dialog.waitFor({ state: "hidden" });
+  });
+
+  it("tracked marks are proposals until T accepts them: the tracker's impact becomes the clip's", async () => {
+    const tracked = await makeReadyClip({ studioId: w.studioA.id, fittingId: w.own.fitting.id, buildId: w.own.build.id, createdBy: w.fitter.id });
+    const summary = { version: 1, ballFound: true, ball: { x: 320, y: 180, diameterPx: 20 }, addressFrame: 2, impactFrame: 18, impactSource: "ball", ballTrackFrames: 0, clubheadFrames: 0, markerFrames: 0, seconds: 0.1, notes: [] };
+    await db.update(schema.clips).set({ tracking: summary, suggestedImpactFrame: 18 }).where(eq(schema.clips.id, tracked.id));
+    // A proposed face line at the tracker's address frame, and the fitter's own target line.
+    await db.insert(schema.marks).values([
+      { studioId: w.studioA.id, clipId: tracked.id, frame: 2, kind: "line", role: "face", points: [[260, 200], [380, 204]], source: "tracked", precisionPx: 0.3 },
+      { studioId: w.studioA.id, clipId: tracked.id, frame: 2, kind: "line", role: "target", points: [[320, 340], [320, 40]], authorUserId: w.fitter.id },
+    ]);
+    const p = await context.newPage();
+    await p.goto(`${BASE}/studio/clips/${tracked.id}`);
+    await p.locator("[data-painted-frame]").waitFor();
+    await expect.poll(() => p.getByTestId("tracking-line").textContent()).toBe("Ball found · impact from the ball at frame 18 · 1 proposed mark");
+    // The clip opens on frame 0 (no address yet); the proposal is on frame 2, listed as "(proposed)".
+    await p.keyboard.press("ArrowRight");
+    await p.keyboard.press("ArrowRight");
+    await p.locator('[data-painted-frame="2"]').waitFor();
+    expect(await p.getByRole("button", { name: /Face line/ }).textContent()).toContain("(proposed)");
+    await p.keyboard.press("t");
+    await expect.poll(() => p.getByTestId("tracking-line").textContent(), { timeout: 10_000 }).toBe("Ball found · impact from the ball at frame 18 · accepted");
+    const clip = (await call(api, "GET", `/api/clips/${tracked.id}`)).body;
+    expect(clip.moments).toMatchObject({ address: 2, impact: 18 });
+    expect(typeof clip.tracking.acceptedAt).toBe("string");
+    expect(await p.getByRole("button", { name: /Accept tracked marks/ }).isDisabled()).toBe(true);
+    expect(await p.getByRole("button", { name: /Face line/ }).textContent()).not.toContain("proposed");
+    // Aim from the accepted face line and the hand-drawn target line: a number with its ±, made from both kinds of mark.
+    const aim = p.getByTestId("readout-aim");
+    await expect.poll(() => aim.getByTestId("uncertainty").textContent(), { timeout: 15_000 }).toMatch(/^±(\d+\.\d|<0\.1)°$/);
+    expect(await aim.getByTestId("method").textContent()).toBe("mixed");
+    await p.close();
   });
 
   it("another studio's fitter gets the not-found page", async () => {
