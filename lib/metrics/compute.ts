@@ -41,7 +41,9 @@ export function computeMeasurements(clip: ClipContext, marks: StoredMark[], opti
     if (!Number.isFinite(o.value)) return { key, value: null, unit, needs: ["marks that give a finite value (check for a zero ball speed)"] };
     const d = deviations.get(key) ?? [];
     const uncertainty = d.length > 1 ? Math.sqrt(d.reduce((s, x) => s + x * x, 0) / d.length) : null;
-    return { key, value: o.value, uncertainty, unit, frames: o.frames, markIds: o.markIds, method: methodOf(o.markIds, source) };
+    const markIds = [...new Set(o.markIds)];
+    const frames = [...new Set(o.frames)].sort((a, b) => a - b);
+    return { key, value: o.value, uncertainty, unit, frames, markIds, method: methodOf(markIds, source) };
   });
 }
 

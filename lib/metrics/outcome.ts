@@ -6,8 +6,9 @@ export type Outcome = Found | Missing;
 export const isMissing = (o: Outcome): o is Missing => "needs" in o;
 export const missing = (...needs: string[]): Missing => ({ needs });
 
+/** Sources may repeat here; compute.ts sorts and de-duplicates them once for the answer (the Monte Carlo runs never need them). */
 export function found(value: number, frames: readonly number[], markIds: readonly string[]): Found {
-  return { value, frames: [...new Set(frames)].sort((a, b) => a - b), markIds: [...new Set(markIds)] };
+  return { value, frames: frames as number[], markIds: markIds as string[] };
 }
 
 /** Combines several outcomes: all their needs if any is missing, else fn of the values with merged sources. */

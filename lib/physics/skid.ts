@@ -61,12 +61,21 @@ function motionAt(speed: number, spin: number, t: number, mu: number, radius: nu
   return { x: x + rollSpeed * (t - slideEnd), phi: phi + (rollSpeed / radius) * (t - slideEnd) };
 }
 
-function slope(times: readonly number[], values: readonly number[]): number {
-  const n = times.length;
-  const tm = times.reduce((a, b) => a + b, 0) / n;
-  const vm = values.reduce((a, b) => a + b, 0) / n;
+/** Σ(tᵢ − t̄)·tᵢ² / Σ(tᵢ − t̄)²: the least-squares slope of t² sampled at these times. */
+function curvatureFactor(times: readonly number[]): number {
+  return slopeOf(times, (t) => t * t);
+}
+
+/** Least-squares slope of f(t) sampled at `times` (Σ(tᵢ − t̄)·f(tᵢ) / Σ(tᵢ − t̄)²); run inside Newton's loop, so no arrays. */
+function slopeOf(times: readonly number[], f: (t: number) => number): number {
+  let tm = 0;
+  for (const t of times) tm += t;
+  tm /= times.length;
   let sxy = 0, sxx = 0;
-  times.forEach((t, i) => { sxy += (t - tm) * ((values[i] as number) - vm); sxx += (t - tm) ** 2; });
+  for (const t of times) {
+    sxy += (t - tm) * f(t);
+    sxx += (t - tm) * (t - tm);
+  }
   return sxy / sxx;
 }
 
@@ -79,16 +88,21 @@ function slope(times: readonly number[], values: readonly number[]): number {
 export function launchFromTrack({ meanSpeed, speedTimes, meanSpin, spinTimes, mu, radius = BALL_RADIUS_M, gravity = STANDARD_GRAVITY }: TrackedRoll): { speed: number; spin: number } | null {
   if (!(mu > 0) || speedTimes.length < 2 || spinTimes.length < 2) return null;
   const predict = (v: number, w: number): [number, number] => [
-    slope(speedTimes, speedTimes.map((t) => motionAt(v, w, t, mu, radius, gravity).x)),
-    slope(spinTimes, spinTimes.map((t) => motionAt(v, w, t, mu, radius, gravity).phi)),
+    slopeOf(speedTimes, (t) => motionAt(v, w, t, mu, radius, gravity).x),
+    slopeOf(spinTimes, (t) => motionAt(v, w, t, mu, radius, gravity).phi),
   ];
-  let [v, w] = [meanSpeed, meanSpin];
+  // Start from the exact answer for a ball sliding over every tracked frame: the least-squares slope
+  // of a + b·t² sampled at tᵢ is a + b·Σ(tᵢ − t̄)tᵢ² / Σ(tᵢ − t̄)², with b = ∓μg/2 for the centre and
+  // ±5μg/(4r) for the turning (sign of the slip).
+  const sign = Math.sign(meanSpeed - radius * meanSpin) || 1;
+  let v = meanSpeed + sign * ((mu * gravity) / 2) * curvatureFactor(speedTimes);
+  let w = meanSpin - sign * ((5 * mu * gravity) / (4 * radius)) * curvatureFactor(spinTimes);
   const scaleV = Math.max(Math.abs(meanSpeed), 1e-3);
   const scaleW = Math.max(Math.abs(meanSpin), scaleV / radius, 1e-3);
   for (let i = 0; i < 50; i++) {
     const [pv, pw] = predict(v, w);
     const [ev, ew] = [meanSpeed - pv, meanSpin - pw];
-    if (Math.abs(ev) < 1e-12 * scaleV && Math.abs(ew) < 1e-12 * scaleW) return { speed: v, spin: w };
+    if (Math.abs(ev) < 1e-10 * scaleV && Math.abs(ew) < 1e-10 * scaleW) return { speed: v, spin: w };
     const hv = 1e-7 * scaleV, hw = 1e-7 * scaleW;
     const [av, aw] = predict(v + hv, w);
     const [bv, bw] = predict(v, w + hw);
@@ -96,8 +110,12 @@ export function launchFromTrack({ meanSpeed, speedTimes, meanSpin, spinTimes, mu
     const det = j[0][0] * j[1][1] - j[0][1] * j[1][0];
     // Rolling throughout: speed and spin move together, and only their rolling speed is seen.
     if (Math.abs(det) < 1e-6 * Math.abs(j[0][0] * j[1][1]) || !Number.isFinite(det)) return null;
-    v += (j[1][1] * ev - j[0][1] * ew) / det;
-    w += (j[0][0] * ew - j[1][0] * ev) / det;
+    const dv = (j[1][1] * ev - j[0][1] * ew) / det;
+    const dw = (j[0][0] * ew - j[1][0] * ev) / det;
+    v += dv;
+    w += dw;
+    // Converged to what the finite-difference slopes can resolve.
+    if (Math.abs(dv) < 1e-9 * scaleV && Math.abs(dw) < 1e-9 * scaleW) return { speed: v, spin: w };
   }
   return { speed: v, spin: w };
 }
