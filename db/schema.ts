@@ -2,7 +2,7 @@
 // query can be scoped to the actor's studio (see lib/server/access).
 import { sql } from "drizzle-orm";
 import {
-  bigint, boolean, doublePrecision, index, integer, jsonb, pgEnum, pgTable, primaryKey, real,
+  type AnyPgColumn, bigint, boolean, doublePrecision, index, integer, jsonb, pgEnum, pgTable, primaryKey, real,
   text, timestamp, uniqueIndex, uuid,
 } from "drizzle-orm/pg-core";
 
@@ -122,6 +122,8 @@ export const fittings = pgTable("fittings", {
   status: fittingStatusEnum("status").notNull().default("planned"),
   notes: text("notes").notNull().default(""),
   consentConfirmedAt: timestamp("consent_confirmed_at", { withTimezone: true }),
+  // The build new putts from the capture computer's watch folder go to (at most one per fitting).
+  recordingBuildId: uuid("recording_build_id").references((): AnyPgColumn => builds.id, { onDelete: "set null" }),
   ...timestamps,
 }, (t) => [
   index("fittings_studio_scheduled_idx").on(t.studioId, t.scheduledAt),
@@ -205,9 +207,12 @@ export const clips = pgTable("clips", {
   // clip settings), in the same statement as the change.
   measureRevision: integer("measure_revision").notNull().default(0),
   createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+  // SHA-256 of the file as sent (hex): one file is never uploaded twice into a fitting.
+  contentSha256: text("content_sha256"),
   ...timestamps,
 }, (t) => [
   index("clips_build_created_idx").on(t.buildId, t.createdAt),
+  uniqueIndex("clips_fitting_content_sha256_key").on(t.fittingId, t.contentSha256),
   index("clips_fitting_created_idx").on(t.fittingId, t.createdAt),
   index("clips_studio_state_updated_idx").on(t.studioId, t.state, t.updatedAt),
   uniqueIndex("clips_stroke_view_key").on(t.strokeId, t.view),

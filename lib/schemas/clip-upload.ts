@@ -13,6 +13,8 @@ export const clipCreateSchema = z.object({
   slowMotionFactor: z.number().min(1).max(64).optional(),
   strokeId: z.string().uuid().optional(),
   consentConfirmed: z.boolean().optional(),
+  // SHA-256 of the file (hex): a second file with the same content is answered with the first clip.
+  contentSha256: z.string().regex(/^[0-9a-fA-F]{64}$/, "must be a SHA-256 in hex (64 characters)").transform((v) => v.toLowerCase()).optional(),
 });
 
 export const clipListQuery = z.object({ fittingId: z.string().uuid() });

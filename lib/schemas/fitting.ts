@@ -12,6 +12,11 @@ export const fittingUpdateSchema = z.object({
   notes: z.string().max(4000).optional(),
 });
 
+/** Which build new putts from the watch folder go to; null stops recording. */
+export const recordingSchema = z.object({
+  buildId: z.string().uuid("must be a build id (uuid) or null").nullable(),
+});
+
 const quarter = (v: number) => Math.abs(v * 4 - Math.round(v * 4)) < 1e-9;
 const half = (v: number) => Math.abs(v * 2 - Math.round(v * 2)) < 1e-9;
 const hundredth = (v: number) => Math.abs(v * 100 - Math.round(v * 100)) < 1e-6;

@@ -7,5 +7,9 @@ export const GET = apiRoute({ query: clipListQuery }, async ({ actor, query }) =
   clips: await listClipsOfFitting(actor, query.fittingId),
 }));
 
-// POST /api/clips — register a clip and get a presigned PUT URL for its file.
-export const POST = apiRoute({ body: clipCreateSchema }, async ({ actor, body }) => created(await createClipUpload(actor, body)));
+// POST /api/clips — register a clip and get a presigned PUT URL for its file. A file whose
+// contentSha256 the fitting already has is answered 200 with that clip and `duplicate: true`.
+export const POST = apiRoute({ body: clipCreateSchema }, async ({ actor, body }) => {
+  const result = await createClipUpload(actor, body);
+  return result.duplicate ? result : created(result);
+});

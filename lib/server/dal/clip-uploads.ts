@@ -21,6 +21,10 @@ export async function createClipUpload(actor: SignedInActor, input: z.infer<type
   const [build] = await db.select().from(builds).where(and(eq(builds.id, input.buildId), eq(builds.fittingId, fitting.id)));
   if (!build) throw new ApiError("not_found", "No such build in this fitting");
   if (input.strokeId) await assertStrokeOfBuild(input.strokeId, build.id);
+  if (input.contentSha256) {
+    const existing = await clipWithContent(fitting.id, input.contentSha256);
+    if (existing) return duplicateAnswer(existing);
+  }
   const max = env().UPLOAD_MAX_BYTES;
   if (input.sizeBytes > max) throw new ApiError("payload_too_large", `The file is ${mib(input.sizeBytes)}; the limit is ${mib(max)}`);
   if (!fitting.consentConfirmedAt) {
@@ -33,24 +37,51 @@ export async function createClipUpload(actor: SignedInActor, input: z.infer<type
   const captureFps = input.captureFps ?? studio!.settings.cameraFps[input.view];
   const id = crypto.randomUUID();
   const key = clipKeys(fitting.studioId, id).source;
-  const [clip] = await db
+  const inserted = await db
     .insert(clips)
     .values({
       id, studioId: fitting.studioId, fittingId: fitting.id, buildId: build.id, strokeId: input.strokeId ?? null, view: input.view,
       originalName: input.fileName, contentType: input.contentType, sizeBytes: input.sizeBytes, objectKey: key, captureFps,
       slowMotionFactor: input.slowMotionFactor ?? Math.max(1, Math.round(captureFps / 30)), createdBy: actor.userId,
+      contentSha256: input.contentSha256 ?? null,
     })
     .returning()
     .catch((err: unknown) => {
+      if (pgErrorCode(err) === "23505" && pgConstraint(err) === "clips_fitting_content_sha256_key") return null;
       // One clip per view in a stroke (unique index clips_stroke_view_key).
       if (pgErrorCode(err) === "23505") {
         throw new ApiError("conflict", `This stroke already has ${input.view === "overhead" ? "an" : "a"} ${input.view} clip`);
       }
       throw err;
     });
-  const url = await presignUpload(key, input.contentType, input.sizeBytes);
-  return { clip: clip!, upload: { method: "PUT" as const, url, headers: { "content-type": input.contentType } } };
+  if (inserted === null) {
+    // The same file was registered by a concurrent call a moment ago: answer with that clip.
+    return duplicateAnswer((await clipWithContent(fitting.id, input.contentSha256!))!);
+  }
+  const clip = inserted[0]!;
+  return { clip, duplicate: false, upload: await uploadTarget(clip) };
 }
+
+async function clipWithContent(fittingId: string, contentSha256: string) {
+  const [row] = await db.select().from(clips).where(and(eq(clips.fittingId, fittingId), eq(clips.contentSha256, contentSha256)));
+  return row;
+}
+
+/**
+ * A file the fitting already has. While its upload never arrived (a dropped connection, a watcher
+ * killed mid-file), the answer carries a fresh upload URL so that the sender can finish it.
+ */
+async function duplicateAnswer(clip: typeof clips.$inferSelect) {
+  return { clip, duplicate: true, upload: clip.state === "awaiting_upload" ? await uploadTarget(clip) : null };
+}
+
+async function uploadTarget(clip: typeof clips.$inferSelect) {
+  const url = await presignUpload(clip.objectKey, clip.contentType, clip.sizeBytes);
+  return { method: "PUT" as const, url, headers: { "content-type": clip.contentType } };
+}
+
+const pgConstraint = (err: unknown) =>
+  ((err as { cause?: { constraint?: string } }).cause?.constraint ?? (err as { constraint?: string }).constraint);
 
 /**
  * The browser says the upload is done: check the stored object (it must be there, with the

@@ -6,6 +6,7 @@ import { withChecks } from "@/lib/compare/build-checks";
 import type { fittingCreateSchema, fittingUpdateSchema } from "@/lib/schemas/fitting";
 import { assertGolfer, assertStudio, type SignedInActor } from "../access";
 import { notFound } from "../http/errors";
+import { pgErrorCode } from "../pg-errors";
 import { getGolfer } from "./golfers";
 
 const { fittings, builds, golfers, clips } = schema;
@@ -37,6 +38,29 @@ export async function fittingForWrite(actor: SignedInActor, id: string) {
   const fitting = await loadFitting(actor, id);
   await assertGolfer(actor, "golfer.write", { studioId: fitting.studioId, golferId: fitting.golferId });
   return fitting;
+}
+
+/**
+ * Marks the build that new putts from the capture computer go to (null: none). A fitting has at
+ * most one; the watch folder asks for it when a file appears.
+ */
+export async function setRecordingBuild(actor: SignedInActor, id: string, buildId: string | null) {
+  const fitting = await fittingForWrite(actor, id);
+  if (buildId) {
+    const [build] = await db.select({ id: builds.id }).from(builds).where(and(eq(builds.id, buildId), eq(builds.fittingId, fitting.id)));
+    if (!build) throw notFound("No such build in this fitting");
+  }
+  const [row] = await db
+    .update(fittings)
+    .set({ recordingBuildId: buildId, updatedAt: new Date() })
+    .where(and(eq(fittings.id, id), eq(fittings.studioId, fitting.studioId)))
+    .returning({ id: fittings.id, recordingBuildId: fittings.recordingBuildId })
+    .catch((err: unknown) => {
+      // The build was deleted between the check and the write.
+      if (pgErrorCode(err) === "23503") throw notFound("No such build in this fitting");
+      throw err;
+    });
+  return { fittingId: row!.id, recordingBuildId: row!.recordingBuildId };
 }
 
 export async function listFittingsOfGolfer(actor: SignedInActor, golferId: string) {
