@@ -83,10 +83,15 @@ function slopeOf(times: readonly number[], f: (t: number) => number): number {
  * Speed and spin at the impact instant from the least-squares speed and spin a camera measured
  * over later frames: the launch state whose sliding-then-rolling motion (skidToRoll's model)
  * gives the same least-squares slopes over the same frames, found by Newton's method. Null when
- * the ball was already rolling over all tracked frames (the launch state then cannot be told).
+ * the ball was rolling over all (or all but the first) tracked frames: the launch state then cannot
+ * be told.
  */
 export function launchFromTrack({ meanSpeed, speedTimes, meanSpin, spinTimes, mu, radius = BALL_RADIUS_M, gravity = STANDARD_GRAVITY }: TrackedRoll): { speed: number; spin: number } | null {
   if (!(mu > 0) || speedTimes.length < 2 || spinTimes.length < 2) return null;
+  // A slide seen on fewer than two tracked frames is one of many launches that fit (down to a ball
+  // rolling from the start): not identified.
+  const seen = [...speedTimes].sort((a, b) => a - b)[1] as number;
+  const identified = (v: number, w: number) => ((2 * Math.abs(v - radius * w)) / (7 * mu * gravity) > seen ? { speed: v, spin: w } : null);
   const predict = (v: number, w: number): [number, number] => [
     slopeOf(speedTimes, (t) => motionAt(v, w, t, mu, radius, gravity).x),
     slopeOf(spinTimes, (t) => motionAt(v, w, t, mu, radius, gravity).phi),
@@ -102,7 +107,7 @@ export function launchFromTrack({ meanSpeed, speedTimes, meanSpin, spinTimes, mu
   for (let i = 0; i < 50; i++) {
     const [pv, pw] = predict(v, w);
     const [ev, ew] = [meanSpeed - pv, meanSpin - pw];
-    if (Math.abs(ev) < 1e-10 * scaleV && Math.abs(ew) < 1e-10 * scaleW) return { speed: v, spin: w };
+    if (Math.abs(ev) < 1e-10 * scaleV && Math.abs(ew) < 1e-10 * scaleW) return identified(v, w);
     const hv = 1e-7 * scaleV, hw = 1e-7 * scaleW;
     const [av, aw] = predict(v + hv, w);
     const [bv, bw] = predict(v, w + hw);
@@ -115,7 +120,7 @@ export function launchFromTrack({ meanSpeed, speedTimes, meanSpin, spinTimes, mu
     v += dv;
     w += dw;
     // Converged to what the finite-difference slopes can resolve.
-    if (Math.abs(dv) < 1e-9 * scaleV && Math.abs(dw) < 1e-9 * scaleW) return { speed: v, spin: w };
+    if (Math.abs(dv) < 1e-9 * scaleV && Math.abs(dw) < 1e-9 * scaleW) return identified(v, w);
   }
-  return { speed: v, spin: w };
+  return identified(v, w);
 }
