@@ -1,7 +1,7 @@
 /**
  * The generated face-on and down-the-line clips and the camera faults, checked against Debian's
  * ffmpeg tools as the reference:
- * - frame count and size from Debian's ffprobe (REFERENCES.md, "Video"):
+ * - frame count and size from Debian's ffprobe (docs/references.md, "Video"):
  *     ffprobe -v error -count_frames -select_streams v:0 -show_entries stream=nb_read_frames,width,height,r_frame_rate
  * - pixels from Debian's ffmpeg decoding to 8-bit grey (`-pix_fmt gray`, BT.601 luma), so the
  *   truth's points are checked on the picture a tracker will see.

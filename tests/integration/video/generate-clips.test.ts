@@ -1,5 +1,5 @@
 /**
- * The generated clips' truth agrees with METRICS.md's overhead definitions and with the
+ * The generated clips' truth agrees with docs/measurements.md's overhead definitions and with the
  * pictures that come out of the encoder.
  */
 import { mkdtemp, rm } from "node:fs/promises";
@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { clipTruth, generateClip, type ClipOptions, type Point } from "@/tests/fixtures/generate-clips";
 import { readGreyFrames } from "@/workers/video/ffmpeg";
 
-/** METRICS.md overhead: t = target direction, r = (−t_y, t_x), angle(d) = atan2(d·r, d·t). */
+/** docs/measurements.md overhead: t = target direction, r = (−t_y, t_x), angle(d) = atan2(d·r, d·t). */
 function angleDeg(d: Point, t: Point): number {
   const r: Point = [-t[1], t[0]];
   return (Math.atan2(d[0] * r[0] + d[1] * r[1], d[0] * t[0] + d[1] * t[1]) * 180) / Math.PI;
@@ -31,7 +31,7 @@ describe("clip truth", () => {
   const truth = clipTruth(options);
   const k = options.impactFrame;
 
-  it("has the face angles asked for at address and impact (METRICS.md sign: + open)", () => {
+  it("has the face angles asked for at address and impact (docs/measurements.md sign: + open)", () => {
     const address = truth.frames[0]!, impact = truth.frames[k]!;
     expect(angleDeg(faceNormal(address.faceHeel, address.faceToe, target), target)).toBeCloseTo(2.5, 9);
     expect(angleDeg(faceNormal(impact.faceHeel, impact.faceToe, target), target)).toBeCloseTo(-1.5, 9);

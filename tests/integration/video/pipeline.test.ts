@@ -1,6 +1,6 @@
 /**
  * The clip pipeline on generated overhead clips with known truth, checked against
- * Debian's ffprobe as the reference tool (REFERENCES.md, "Video"):
+ * Debian's ffprobe as the reference tool (docs/references.md, "Video"):
  *   ffprobe -v error -count_frames -select_streams v:0 -show_entries stream=nb_read_frames
  */
 import { execFile } from "node:child_process";
