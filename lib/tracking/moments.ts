@@ -9,20 +9,29 @@ import { median } from "./image";
 /** A move smaller than this (px) is the fit's own jitter, not the ball starting to roll. */
 export const MIN_BALL_MOVE_PX = 0.5;
 
+/** Frames within which a real start must carry the ball `confirmPx` from rest. */
+export const CONFIRM_FRAMES = 10;
+
 /**
  * `displacement[f]`: distance of the ball's centre on frame f from its rest position, px
  * (null when the ball was not found on that frame, e.g. blurred away). The ball has moved at
- * frame f when displacement exceeds the threshold on f and on f + 1, without falling back.
- * Returns impact = that f − 1, or null when the ball never moves.
+ * frame f when displacement exceeds the threshold from f on and, within CONFIRM_FRAMES, reaches
+ * `confirmPx` (or the ball is lost): a shadow edge sweeping over the ball shifts its fitted
+ * centre a little and gives it back, a struck ball keeps going. Returns impact = that f − 1, or
+ * null when the ball never moves (or the series ends before a move is confirmed).
  */
-export function impactFromBall(displacement: readonly (number | null)[], jitterPx = 0): number | null {
+export function impactFromBall(displacement: readonly (number | null)[], jitterPx = 0, confirmPx = 0): number | null {
   const threshold = Math.max(MIN_BALL_MOVE_PX, 6 * jitterPx);
-  const moved = (v: number | null | undefined) => v === null || (v !== undefined && v > threshold);
+  const confirm = Math.max(confirmPx, 2 * threshold);
   for (let f = 1; f < displacement.length - 1; f++) {
     const d = displacement[f];
     if (d === null || d === undefined || d <= threshold) continue;
-    const next = displacement[f + 1];
-    if (moved(next) && (next === null || next! >= d - threshold)) return f - 1;
+    for (let g = f + 1; g < Math.min(displacement.length, f + CONFIRM_FRAMES + 1); g++) {
+      const v = displacement[g];
+      if (v === null || v === undefined) return f - 1;
+      if (v <= threshold) break;
+      if (v >= confirm) return f - 1;
+    }
   }
   return null;
 }

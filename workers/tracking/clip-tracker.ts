@@ -16,7 +16,7 @@ import { fitBall, type BallFit } from "@/lib/tracking/ball";
 import { changedCentroid, findHeadEdge, findShaftLine, headSign, type HeadSearch } from "@/lib/tracking/head";
 import { boxAround, cropImage, median, medianOfCrops, robustStd, type GreyImage, type PixelBox } from "@/lib/tracking/image";
 import { findMarker } from "@/lib/tracking/marker";
-import { addressFromStillness, impactFromBall, refineAddress, restJitter } from "@/lib/tracking/moments";
+import { addressFromStillness, CONFIRM_FRAMES, impactFromBall, refineAddress, restJitter } from "@/lib/tracking/moments";
 import type { Proposal, TrackingResult } from "@/lib/tracking/types";
 import { findBallsAtRest } from "./find-balls";
 import type { OpenCv } from "./opencv";
@@ -24,7 +24,10 @@ import type { OpenCv } from "./opencv";
 export const BALL_DIAMETER_MM = 42.67; // Rules of Golf, Appendix III: not less than 1.680 in (42.67 mm)
 export const CLUBHEAD_FRAMES = 8;
 export const BALL_TRACK_FRAMES = 40;
-const RING = CLUBHEAD_FRAMES + 4;
+/** the last 8 frames before impact must still be here when the ball's start is confirmed */
+const RING = CLUBHEAD_FRAMES + CONFIRM_FRAMES + 3;
+/** a start is confirmed once the ball is this share of its radius from rest */
+const CONFIRM_RADII = 0.5;
 /** the region searched for the head, in ball radii around the ball */
 const HEAD_REACH_RADII = 8;
 /** sampling step of the change count (every other pixel and row is plenty for "did it move") */
@@ -175,7 +178,7 @@ export class ClipTracker {
           c.crops = c.crops.filter((crop) => crop.frame % c.cropStep === 0);
         }
       }
-      const k = impactFromBall(c.displacement, restJitter(c.displacement));
+      const k = impactFromBall(c.displacement, restJitter(c.displacement), CONFIRM_RADII * c.rest.r);
       if (k !== null && (!earliest || k < earliest.k)) earliest = { c, k };
     }
     if (!earliest) return;

@@ -13,6 +13,13 @@ describe("impact from the ball's displacement", () => {
     expect(impactFromBall(series)).toBe(6);
   });
 
+  it("ignores a shift that grows and goes back (a shadow edge sweeping over the ball) and needs the ball carried away", () => {
+    const shadow = [0, 0, 0, 0.6, 1.2, 1.8, 1.2, 0.6, 0.1, 0, 0, 0, 3, 6, 9, 12];
+    expect(impactFromBall(shadow, 0, 5)).toBe(11);
+    // Not confirmed yet: the series ends before the ball is 5 px from rest.
+    expect(impactFromBall([0, 0, 0, 1, 2, 3], 0, 5)).toBeNull();
+  });
+
   it("counts a frame where the ball is lost (blurred away) as moved", () => {
     expect(impactFromBall([0, 0, 0, 0, 3, null, null])).toBe(3);
   });
