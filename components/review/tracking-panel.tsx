@@ -11,7 +11,7 @@ export function TrackingPanel({ tracking: t, proposals }: Props) {
       <div className="flex items-center justify-between gap-3">
         <h2 id="tracking-heading" className="text-label font-medium uppercase text-slate-300">Tracking</h2>
         <label className="flex items-center gap-2 text-label text-slate-200">
-          <input type="checkbox" role="switch" className="h-4 w-4 accent-signal" checked={t.enabled} disabled={t.busy !== null}
+          <input type="checkbox" role="switch" aria-label="Tracking on this clip" className="h-4 w-4 accent-signal" checked={t.enabled} disabled={t.busy !== null}
             onChange={(e) => t.toggle(e.target.checked)} aria-describedby="tracking-line" />
           {t.enabled ? "On" : "Off"}
         </label>
