@@ -9,7 +9,7 @@
  */
 import type { Vec2 } from "@/lib/geometry/vector";
 import { fitLineClipped, lineStdErrAt, pointOnLine, type LineFit } from "./fits";
-import { sampleBilinear, type GreyImage, type PixelBox } from "./image";
+import { median, sampleBilinear, type GreyImage, type PixelBox } from "./image";
 
 export type HeadSearch = {
   box: PixelBox;
@@ -20,7 +20,7 @@ export type HeadSearch = {
   threshold: number;
   /** the pixel noise (grey levels, one s.d.) for the precision of centroids */
   noise: number;
-  /** a disc left out (the ball), as it may differ between the frames */
+  /** a disc left out (the ball): its pixels are not head, and edge points near it are not used */
   exclude?: { x: number; y: number; r: number };
 };
 
@@ -84,6 +84,8 @@ function bodyRun(across: number[]): [number, number] | null {
 }
 
 export const MIN_HEAD_PIXELS = 40;
+/** edge points this close to the excluded disc (the ball) are left out of the edge fit, px */
+const EDGE_CLEARANCE_PX = 4;
 
 /** Depths inside the leading edge (px) at which the head's two ends are looked for. */
 const END_DEPTHS = [1, 1.5, 2, 2.5, 3];
@@ -170,7 +172,14 @@ export function findHeadEdge(frame: GreyImage, background: GreyImage, search: He
   // by a pixel's 1/√12 (uniform), the middle by half their root-sum-square.
   const sMidErr = Math.hypot((sigmaC * Math.sqrt(body.reduce((acc, b) => acc + (b.s - sMid) ** 2, 0))) / sw, Math.SQRT1_2 / Math.sqrt(12));
 
-  const coverage = (x: number, y: number) => (search.sign * (sampleBilinear(background, x, y) - sampleBilinear(frame, x, y))) / contrast;
+  // Coverage per point against the background's own level there: frame = c·head + (1 − c)·turf, so
+  // c = (turf − frame) / (turf − head). The turf's grain then no longer moves the edge.
+  const headLevel = median(mask.filter((m) => m.d >= 0.8 * contrast).map((m) => frame.data[Math.floor(m.y) * frame.width + Math.floor(m.x)]!));
+  const coverage = (x: number, y: number) => {
+    const turf = sampleBilinear(background, x, y);
+    const span = search.sign * (turf - headLevel);
+    return span > search.threshold ? (search.sign * (turf - sampleBilinear(frame, x, y))) / span : (search.sign * (turf - sampleBilinear(frame, x, y))) / contrast;
+  };
   const trim = Math.max(1, Math.round((b1 - b0) * 0.12));
   const edgePoints: Vec2[] = [];
   for (let bin = b0 + trim; bin <= b1 - trim; bin++) {
@@ -192,8 +201,13 @@ export function findHeadEdge(frame: GreyImage, background: GreyImage, search: He
       prev = c; prevA = a;
     }
   }
-  if (edgePoints.length < 5) return null;
-  const edge = fitLineClipped(edgePoints, 3, 3, 0.3);
+  // Where the head touches the ball its rim blends into the ball's, not the turf's: those points
+  // lean forward. Left out while most of the edge stays (overhead); a face-on face is all beside it.
+  const ex = search.exclude;
+  const clear = ex ? edgePoints.filter(([x, y]) => Math.hypot(x - ex.x, y - ex.y) >= ex.r + EDGE_CLEARANCE_PX) : edgePoints;
+  const usable = clear.length >= 0.6 * edgePoints.length ? clear : edgePoints;
+  if (usable.length < 5) return null;
+  const edge = fitLineClipped(usable, 3, 3, 0.3);
   if (!edge) return null;
   const dirAcross = edge.direction[0] * p[0] + edge.direction[1] * p[1];
   // The leading edge runs across the travel direction; otherwise this is not a head's front.

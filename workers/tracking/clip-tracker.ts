@@ -223,7 +223,7 @@ export class ClipTracker {
     if (!background) return void this.notes.push("Too few frames between address and impact to see the turf without the head: no clubhead, face or shaft proposals.");
     const impactData = this.fromRing(k)!;
     const sign = headSign(this.image(impactData), background, c.box, this.threshold);
-    const base = { box: c.box, sign, threshold: this.threshold };
+    const base = { box: c.box, sign, threshold: this.threshold, exclude: { x: c.rest.x, y: c.rest.y, r: c.rest.r } };
     const earliestFrame = Math.max(0, k - CLUBHEAD_FRAMES + 1);
     const atImpact = changedCentroid(this.image(impactData), background, base);
     const atStart = changedCentroid(this.image(this.fromRing(earliestFrame)!), background, base);
