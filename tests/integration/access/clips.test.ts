@@ -8,6 +8,7 @@ import { insertClip } from "../../support/clip-rows";
 type Clip = Awaited<ReturnType<typeof insertClip>>;
 type W = World & { clips: Record<Target, Clip>; strokes: Record<Target, string> };
 
+const SENT_SHA256 = "5e".repeat(32);
 const clipPath = (w: W, t: Target) => `/api/clips/${w.clips[t].id}`;
 const redirectTo = (okStatus: number) => ({
   own: { admin: okStatus, fitter: okStatus, coach: okStatus, golfer: okStatus, anon: 401 },
@@ -23,6 +24,15 @@ const cases: MatrixCase<W>[] = [
       body: { fittingId: golferOf(w, t).fitting.id, buildId: golferOf(w, t).build.id, view: "overhead", fileName: "p.mp4", contentType: "video/mp4", sizeBytes: 100, consentConfirmed: true },
     }),
     expect: writeGolfer(201),
+  },
+  // A file the fitting already has (same SHA-256): the existing clip, 200, to those who may write.
+  {
+    route: "POST /api/clips (a file already sent)",
+    request: (w, t) => ({
+      method: "POST", path: "/api/clips",
+      body: { fittingId: golferOf(w, t).fitting.id, buildId: golferOf(w, t).build.id, view: "overhead", fileName: "again.mp4", contentType: "video/mp4", sizeBytes: 1_000_000, contentSha256: SENT_SHA256 },
+    }),
+    expect: writeGolfer(200),
   },
   { route: "GET /api/clips?fittingId=", request: (w, t) => ({ method: "GET", path: `/api/clips?fittingId=${golferOf(w, t).fitting.id}` }), expect: readGolfer },
   // The clip is already processed, so an allowed completion queues nothing and answers 200.
@@ -40,7 +50,7 @@ runMatrix("clip pipeline", cases, async (w) => {
   const strokes = {} as Record<Target, string>;
   for (const t of ["own", "sibling", "other"] as Target[]) {
     const owner = golferOf(w, t);
-    clips[t] = await insertClip(owner);
+    clips[t] = await insertClip(owner, { contentSha256: SENT_SHA256 });
     const [stroke] = await db.insert(schema.strokes).values({ studioId: owner.fitting.studioId, buildId: owner.build.id, position: 1 }).returning();
     strokes[t] = stroke!.id;
   }

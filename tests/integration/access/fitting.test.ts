@@ -22,6 +22,7 @@ const cases: MatrixCase<W>[] = [
   { route: "DELETE /api/golfers/{id}", request: (w, t) => ({ method: "DELETE", path: `/api/golfers/${golferOf(w, t).golfer.id}`, body: {} }), expect: eraseGolfer },
   { route: "POST /api/builds/{id}/duplicate", request: (w, t) => ({ method: "POST", path: `/api/builds/${golferOf(w, t).build.id}/duplicate`, body: { change: { loftDeg: 4 } } }), expect: writeGolfer(201) },
   { route: "GET /api/fittings/{id}/comparison", request: (w, t) => ({ method: "GET", path: `/api/fittings/${golferOf(w, t).fitting.id}/comparison` }), expect: readGolfer },
+  { route: "PUT /api/fittings/{id}/recording", request: (w, t) => ({ method: "PUT", path: `/api/fittings/${golferOf(w, t).fitting.id}/recording`, body: { buildId: golferOf(w, t).build.id } }), expect: writeGolfer(200) },
   { route: "GET /api/fittings/{id}/csv", request: (w, t) => ({ method: "GET", path: `/api/fittings/${golferOf(w, t).fitting.id}/csv` }), expect: readGolfer },
   { route: "POST /api/fittings/{id}/specs", request: (w, t) => ({ method: "POST", path: `/api/fittings/${golferOf(w, t).fitting.id}/specs`, body: { buildId: golferOf(w, t).build.id, sendEmail: false } }), expect: writeGolfer(201) },
   { route: "GET /api/specs/{id}", request: (w, t) => ({ method: "GET", path: `/api/specs/${spec(w, t)}` }), expect: readGolfer },

@@ -1,0 +1,137 @@
+// The capture computer's watch folder: `npm run upload -- --watch DIR --fitting ID` against the
+// running stack. Files go into the build recording when they appear, with the view from their
+// camera sub-folder, only once they have stopped growing, and never twice (content hash).
+import { spawn, type ChildProcess } from "node:child_process";
+import { copyFile, mkdir, mkdtemp, open, readFile, stat } from "node:fs/promises";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { setTimeout as sleep } from "node:timers/promises";
+import { eq } from "drizzle-orm";
+import { afterEach, expect, it } from "vitest";
+import { db, schema } from "@/db";
+import { generateClip } from "../../fixtures/generate-clips";
+import { BASE, call } from "../../support/http";
+import { makeWorld, tokenFor } from "../../support/world";
+
+const small = { width: 320, height: 180, fps: 240, frameCount: 60, impactFrame: 35, ballSpeedPxPerFrame: 2 } as const;
+
+type Watcher = { child: ChildProcess; lines: string[] };
+const running: Watcher[] = [];
+afterEach(() => running.forEach((w) => w.child.kill("SIGKILL")));
+
+async function startWatcher(dir: string, fittingId: string, token: string): Promise<Watcher> {
+  // One node process (tsx as a loader), so that a kill reaches the watcher itself.
+  const child = spawn(process.execPath, ["--import", "tsx", "scripts/upload.ts", "--watch", dir, "--fitting", fittingId, "--consent", "--settle-ms", "800"], {
+    env: { ...process.env, FITFRAME_TOKEN: token, FITFRAME_URL: BASE },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  const watcher = { child, lines: [] as string[] };
+  running.push(watcher);
+  let buffered = "";
+  child.stdout!.on("data", (chunk: Buffer) => {
+    buffered += chunk.toString();
+    const parts = buffered.split("\n");
+    buffered = parts.pop()!;
+    watcher.lines.push(...parts);
+  });
+  child.stderr!.on("data", (chunk: Buffer) => process.stderr.write(chunk));
+  await lineMatching(watcher, (l) => l.startsWith("watching "));
+  return watcher;
+}
+
+async function lineMatching(w: Watcher, test: (line: string) => boolean, timeoutMs = 20_000): Promise<string> {
+  const until = Date.now() + timeoutMs;
+  for (;;) {
+    const line = w.lines.find(test);
+    if (line) return line;
+    if (Date.now() > until) throw new Error(`no matching line; the watcher printed:\n${w.lines.join("\n")}`);
+    await sleep(100);
+  }
+}
+const sentLine = (w: Watcher, relative: string) => lineMatching(w, (l) => l.startsWith(`${relative}\t`) && !l.includes("\twaiting"));
+
+/** Writes a file in six pieces 300 ms apart, as a camera does while it records. */
+async function writeSlowly(from: string, to: string) {
+  const bytes = await readFile(from);
+  const handle = await open(to, "w");
+  const piece = Math.ceil(bytes.length / 6);
+  for (let at = 0; at < bytes.length; at += piece) {
+    await handle.write(bytes.subarray(at, at + piece));
+    await handle.sync();
+    await sleep(300);
+  }
+  await handle.close();
+}
+
+it("uploads each finished file into the recording build once, also across a restart", { timeout: 90_000 }, async () => {
+  const w = await makeWorld();
+  const token = await tokenFor(w.fitter.id);
+  const auth = { token: token.value };
+  const [build2] = await db.insert(schema.builds).values({ studioId: w.studioA.id, fittingId: w.own.fitting.id, position: 2, label: "Heavier head" }).returning();
+
+  const staging = await mkdtemp(path.join(tmpdir(), "fitframe-watch-src-"));
+  const clipA = path.join(staging, "a.mp4");
+  const clipB = path.join(staging, "b.mp4");
+  const clipC = path.join(staging, "c.mp4");
+  await Promise.all([
+    generateClip(clipA, { ...small, faceAngleAddressDeg: 0, faceAngleImpactDeg: 1, startDirectionDeg: 0, seed: 1 }),
+    generateClip(clipB, { ...small, view: "face-on", shaftLeanAddressDeg: 3, shaftLeanImpactDeg: 1.5, attackAngleDeg: 2, launchAngleDeg: 1.5, seed: 2 }),
+    generateClip(clipC, { ...small, view: "down-the-line", soleTiltAddressDeg: 0, soleTiltImpactDeg: 1.5, seed: 3 }),
+  ]);
+
+  const dir = await mkdtemp(path.join(tmpdir(), "fitframe-watch-"));
+  for (const view of ["overhead", "face-on", "down-the-line"]) await mkdir(path.join(dir, view));
+  expect((await call(auth, "PUT", `/api/fittings/${w.own.fitting.id}/recording`, { buildId: w.own.build.id })).status).toBe(200);
+
+  const first = await startWatcher(dir, w.own.fitting.id, token.value);
+  await copyFile(clipA, path.join(dir, "overhead", "putt-1.mp4"));
+  await writeSlowly(clipB, path.join(dir, "face-on", "putt-2.mp4"));
+  const lineA = await sentLine(first, path.join("overhead", "putt-1.mp4"));
+  const lineB = await sentLine(first, path.join("face-on", "putt-2.mp4"));
+  expect(lineA).toMatch(/\tsent$/);
+  expect(lineB).toMatch(/\tsent$/);
+
+  // The fitter switches to the second build: the next putt goes there.
+  const switched = await call(auth, "PUT", `/api/fittings/${w.own.fitting.id}/recording`, { buildId: build2!.id });
+  expect(switched.body.recordingBuildId).toBe(build2!.id);
+  expect((await call(auth, "GET", `/api/fittings/${w.own.fitting.id}`)).body.recordingBuildId).toBe(build2!.id);
+  await copyFile(clipC, path.join(dir, "down-the-line", "putt-3.mp4"));
+  expect(await sentLine(first, path.join("down-the-line", "putt-3.mp4"))).toMatch(/\tsent$/);
+
+  // Killed outright; a copy of the first putt lands while it is down, another after the restart.
+  first.child.kill("SIGKILL");
+  await copyFile(clipA, path.join(dir, "overhead", "putt-1-copy.mp4"));
+  const second = await startWatcher(dir, w.own.fitting.id, token.value);
+  await copyFile(clipB, path.join(dir, "putt-2_face-on_again.mp4"));
+  const caughtUp = await sentLine(second, path.join("overhead", "putt-1-copy.mp4"));
+  const named = await sentLine(second, "putt-2_face-on_again.mp4");
+  const clipIdOf = (line: string) => line.split("\t")[1];
+  expect(caughtUp).toContain("already there (putt-1.mp4)");
+  expect(clipIdOf(caughtUp)).toBe(clipIdOf(lineA));
+  expect(named).toContain("already there (putt-2.mp4)");
+  expect(clipIdOf(named)).toBe(clipIdOf(lineB));
+  // Files sent before the restart are not sent again.
+  await sleep(1000);
+  expect(second.lines.filter((l) => /^(overhead|face-on|down-the-line)\/putt-\d\.mp4\t/.test(l))).toEqual([]);
+
+  // Three clips, in the builds that were recording when they appeared, each with its camera's view.
+  type Row = { id: string; buildId: string; view: string; state: string; originalName: string; frameCount: number | null };
+  let rows: Row[] = [];
+  for (const until = Date.now() + 45_000; Date.now() < until; await sleep(500)) {
+    rows = (await call(auth, "GET", `/api/clips?fittingId=${w.own.fitting.id}`)).body.clips;
+    if (rows.every((r) => r.state === "ready" || r.state === "failed")) break;
+  }
+  const summary = rows.map((r) => [r.originalName, r.buildId, r.view, r.state]).sort((a, b) => a[0]!.localeCompare(b[0]!));
+  expect(summary).toEqual([
+    ["putt-1.mp4", w.own.build.id, "overhead", "ready"],
+    ["putt-2.mp4", w.own.build.id, "face-on", "ready"],
+    ["putt-3.mp4", build2!.id, "down-the-line", "ready"],
+  ]);
+  // The slowly written file went up whole: all its bytes, all 60 frames (ffprobe in the worker).
+  const [stored] = await db.select().from(schema.clips).where(eq(schema.clips.id, rows.find((r) => r.originalName === "putt-2.mp4")!.id));
+  expect(stored!.sizeBytes).toBe((await stat(clipB)).size);
+  expect(stored!.frameCount).toBe(60);
+  // The state file remembers every file it sent.
+  const state = JSON.parse(await readFile(path.join(dir, ".fitframe-sent.json"), "utf8"));
+  expect(Object.keys(state).sort()).toEqual([path.join("down-the-line", "putt-3.mp4"), path.join("face-on", "putt-2.mp4"), path.join("overhead", "putt-1-copy.mp4"), path.join("overhead", "putt-1.mp4"), "putt-2_face-on_again.mp4"]);
+});
