@@ -257,6 +257,10 @@ describe("clip review", () => {
     const aim = p.getByTestId("readout-aim");
     await expect.poll(() => aim.getByTestId("uncertainty").textContent(), { timeout: 15_000 }).toMatch(/^±(\d+\.\d|<0\.1)°$/);
     expect(await aim.getByTestId("method").textContent()).toBe("mixed");
+    // The per-clip switch: off, the clip is measured from hand marks only.
+    await p.getByRole("switch", { name: "Tracking on this clip" }).click();
+    await expect.poll(() => p.getByTestId("tracking-line").textContent()).toBe("Tracking is off: only hand marks are measured.");
+    expect((await call(api, "GET", `/api/clips/${tracked.id}`)).body.trackingEnabled).toBe(false);
     await p.close();
   });
 
