@@ -52,11 +52,11 @@ async function uploadFiles(api: Api) {
   const ids: string[] = [];
   for (const file of positionals) {
     try {
-      const { clip, duplicate } = await sendFile(api, {
+      const { clip, sent } = await sendFile(api, {
         fittingId: values.fitting!, buildId: values.build!, view: values.view!, file, captureFps, consentConfirmed: values.consent!,
       });
       ids.push(clip.id);
-      console.log(`${path.basename(file)}\t${clip.id}\t${duplicate ? `already there (${clip.originalName})` : "queued"}`);
+      console.log(`${path.basename(file)}\t${clip.id}\t${sent ? "queued" : `already there (${clip.originalName})`}`);
     } catch (err) {
       failed++;
       console.error(`${file}: ${(err as Error).message}`);

@@ -29,7 +29,8 @@ export class UploadError extends Error {
 
 export type Clip = { id: string; buildId: string; view: string; state: string; originalName: string; failureReason: string | null };
 type Upload = { method: "PUT"; url: string; headers: Record<string, string> };
-export type SendResult = { clip: Clip; duplicate: boolean };
+/** `duplicate`: the fitting had the file already; `sent`: its bytes went up in this call (a fresh clip, or one whose upload had broken off). */
+export type SendResult = { clip: Clip; duplicate: boolean; sent: boolean };
 
 /** Exponential back-off, 0.5 s doubling up to 30 s; gives up after `attempts` or on a non-retryable error. */
 export async function withRetry<T>(what: string, work: () => Promise<T>, attempts = 8, log: (line: string) => void = console.error): Promise<T> {
@@ -108,9 +109,9 @@ export async function sendFile(api: Api, input: SendInput, log?: (line: string) 
       contentType: contentTypeOf(input.file), sizeBytes: size, captureFps: input.captureFps,
       consentConfirmed: input.consentConfirmed, contentSha256: sha256,
     });
-    if (!upload) return { clip, duplicate };
+    if (!upload) return { clip, duplicate, sent: false };
     await putFile(upload, input.file, size);
     await api("POST", `/api/clips/${clip.id}/complete`);
-    return { clip, duplicate };
+    return { clip, duplicate, sent: true };
   }, 10, log);
 }

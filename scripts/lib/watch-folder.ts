@@ -121,13 +121,14 @@ export async function watchFolder(options: WatchOptions) {
     const entry = state[relative]!;
     const { size, mtimeMs } = await stat(absolute);
     const sha256 = await sha256OfFile(absolute);
-    const { clip, duplicate } = await sendFile(api, {
+    const { clip, duplicate, sent } = await sendFile(api, {
       fittingId, buildId: entry.buildId, view, file: absolute, fileName: path.basename(relative),
       captureFps: options.captureFps, consentConfirmed: options.consentConfirmed, sha256,
     }, log);
     Object.assign(entry, { sha256, size, mtimeMs, clipId: clip.id, sentAt: new Date().toISOString() });
     await saveState();
-    log(`${relative}\t${clip.id}\t${clip.buildId}\t${clip.view}\t${duplicate ? `already there (${clip.originalName})` : "sent"}`);
+    const outcome = !sent ? `already there (${clip.originalName})` : duplicate ? "sent (finished an upload that had broken off)" : "sent";
+    log(`${relative}\t${clip.id}\t${clip.buildId}\t${clip.view}\t${outcome}`);
   }
 
   const watcher = watch(dir, {

@@ -2,6 +2,7 @@
 // running stack. Files go into the build recording when they appear, with the view from their
 // camera sub-folder, only once they have stopped growing, and never twice (content hash).
 import { spawn, type ChildProcess } from "node:child_process";
+import { createHash } from "node:crypto";
 import { copyFile, mkdir, mkdtemp, open, readFile, stat } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
@@ -134,4 +135,38 @@ it("uploads each finished file into the recording build once, also across a rest
   // The state file remembers every file it sent.
   const state = JSON.parse(await readFile(path.join(dir, ".fitframe-sent.json"), "utf8"));
   expect(Object.keys(state).sort()).toEqual([path.join("down-the-line", "putt-3.mp4"), path.join("face-on", "putt-2.mp4"), path.join("overhead", "putt-1-copy.mp4"), path.join("overhead", "putt-1.mp4"), "putt-2_face-on_again.mp4"]);
+});
+
+it("finishes a file whose upload broke off, into the clip it was registered as", { timeout: 60_000 }, async () => {
+  const w = await makeWorld();
+  const token = await tokenFor(w.fitter.id);
+  const auth = { token: token.value };
+  const dir = await mkdtemp(path.join(tmpdir(), "fitframe-watch-"));
+  await mkdir(path.join(dir, "overhead"));
+  const file = path.join(dir, "overhead", "putt.mp4");
+  await generateClip(file, { ...small, faceAngleAddressDeg: 0, faceAngleImpactDeg: -1, startDirectionDeg: 0, seed: 4 });
+  const bytes = await readFile(file);
+  const sha256 = createHash("sha256").update(bytes).digest("hex");
+  expect((await call(auth, "PUT", `/api/fittings/${w.own.fitting.id}/recording`, { buildId: w.own.build.id })).status).toBe(200);
+
+  // A sender registered the file and was cut off before its bytes reached the store.
+  const body = { fittingId: w.own.fitting.id, buildId: w.own.build.id, view: "overhead", fileName: "putt.mp4", contentType: "video/mp4", sizeBytes: bytes.length, consentConfirmed: true, contentSha256: sha256 };
+  const registered = await call(auth, "POST", "/api/clips", body);
+  expect(registered.status).toBe(201);
+  const again = await call(auth, "POST", "/api/clips", { ...body, fileName: "renamed.mp4" });
+  expect(again.status).toBe(200);
+  expect(again.body).toMatchObject({ duplicate: true, clip: { id: registered.body.clip.id, state: "awaiting_upload" }, upload: { method: "PUT" } });
+
+  const watcher = await startWatcher(dir, w.own.fitting.id, token.value);
+  const line = await sentLine(watcher, path.join("overhead", "putt.mp4"));
+  expect(line).toContain(`\t${registered.body.clip.id}\t`);
+  expect(line).toContain("finished an upload that had broken off");
+  let rows: { id: string; state: string }[] = [];
+  for (const until = Date.now() + 30_000; Date.now() < until; await sleep(500)) {
+    rows = (await call(auth, "GET", `/api/clips?fittingId=${w.own.fitting.id}`)).body.clips;
+    if (rows.every((r) => r.state === "ready" || r.state === "failed")) break;
+  }
+  expect(rows.map((r) => [r.id, r.state])).toEqual([[registered.body.clip.id, "ready"]]);
+  // Once processed, the same content is answered with no upload at all.
+  expect((await call(auth, "POST", "/api/clips", body)).body).toMatchObject({ duplicate: true, upload: null });
 });
