@@ -50,12 +50,3 @@ export async function trackingSubject(clipId: string) {
     .where(eq(clips.id, clipId));
   return clip ?? null;
 }
-
-/** Tracking turned off: the clip's proposals go (hand marks stay), and the measurements follow. */
-export async function clearTrackingProposals(clipId: string): Promise<void> {
-  await db.transaction(async (tx) => {
-    await tx.update(clips).set({ measureRevision: sql`${clips.measureRevision} + 1`, updatedAt: new Date() }).where(eq(clips.id, clipId));
-    await tx.delete(marks).where(and(eq(marks.clipId, clipId), eq(marks.source, "tracked")));
-  });
-  await refreshMeasurements(clipId, null);
-}
