@@ -54,8 +54,10 @@ export function ReviewScreen({ clip }: { clip: ReviewClip }) {
   const fit = fitViewport(image, stageSize);
   const viewport = userViewport ?? fit;
   const tool = toolState.tool;
-  const onFrame = marks.marks.filter((m) => m.frame === frame);
-  const ghosts = marks.marks.filter((m) => isGhost(m, frame));
+  // With tracking off the proposals count for nothing, so they are not drawn either.
+  const shown = tracking.enabled ? marks.marks : marks.marks.filter((m) => m.source !== "tracked");
+  const onFrame = shown.filter((m) => m.frame === frame);
+  const ghosts = shown.filter((m) => isGhost(m, frame));
   const selected = onFrame.find((m) => m.id === selectedId) ?? null;
   const kind = selected && tool === "select" ? selected.kind : KIND_OF_TOOL[tool];
   const roles = kind ? ROLES_BY_VIEW_AND_KIND[clip.view][kind] : [];
@@ -109,7 +111,7 @@ export function ReviewScreen({ clip }: { clip: ReviewClip }) {
   const onResize = useCallback((s: Size) => setStageSize(s), []);
   const pointsNeeded = kind && tool !== "select" ? POINTS_PER_KIND[kind] : 0;
   const acceptedAt = tracking.tracking?.acceptedAt ?? null;
-  const proposals = marks.marks.filter((m) => isProposal(m, acceptedAt)).length;
+  const proposals = shown.filter((m) => isProposal(m, acceptedAt)).length;
 
   return (
     <div className="fixed inset-0 z-20 flex flex-col bg-ink text-chalk [&_*:focus-visible]:outline-signal" data-saving={marks.saving ? "1" : "0"}>
