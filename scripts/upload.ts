@@ -1,11 +1,12 @@
 // Pushes clips from the capture computer without a browser.
 //   One-shot: FITFRAME_TOKEN=ff_… npm run upload -- --fitting ID --build ID --view overhead --fps 240 [--consent] [--wait] FILES…
 //   Watch:    FITFRAME_TOKEN=ff_… npm run upload -- --watch DIR --fitting ID [--fps 240] [--consent] [--settle-ms 1500]
+//   Both:     [--part-mib 16] — a file larger than one part goes up in parts (multipart upload)
 // Each file is registered with its SHA-256 (a file the fitting already has is never sent twice),
 // sent straight to the store by its presigned URL, then completed. Watch mode: scripts/lib/watch-folder.ts.
 import path from "node:path";
 import { parseArgs } from "node:util";
-import { apiClient, sendFile, type Api, type Clip } from "./lib/upload-client";
+import { apiClient, memoryPartsStore, sendFile, type Api, type Clip } from "./lib/upload-client";
 import { watchFolder } from "./lib/watch-folder";
 
 const { values, positionals } = parseArgs({
@@ -13,7 +14,7 @@ const { values, positionals } = parseArgs({
   options: {
     fitting: { type: "string" }, build: { type: "string" }, view: { type: "string", default: "overhead" },
     fps: { type: "string" }, consent: { type: "boolean", default: false }, wait: { type: "boolean", default: false },
-    watch: { type: "string" }, "settle-ms": { type: "string", default: "1500" },
+    watch: { type: "string" }, "settle-ms": { type: "string", default: "1500" }, "part-mib": { type: "string", default: "16" },
     url: { type: "string", default: process.env.FITFRAME_URL ?? "http://127.0.0.1:3000" },
   },
 });
@@ -21,12 +22,15 @@ const { values, positionals } = parseArgs({
 const USAGE = [
   "usage: FITFRAME_TOKEN=… npm run upload -- --fitting ID --build ID --view overhead|face-on|down-the-line --fps 240 [--consent] [--wait] FILES…",
   "       FITFRAME_TOKEN=… npm run upload -- --watch DIR --fitting ID [--fps 240] [--consent] [--settle-ms 1500]",
+  "       either: [--part-mib 16] (files larger than one part go up in parts)",
 ].join("\n");
 
 const token = process.env.FITFRAME_TOKEN;
 const oneShot = !values.watch && values.build && positionals.length > 0;
 const settleMs = Number(values["settle-ms"]);
-if (!token || !values.fitting || (!values.watch && !oneShot) || !(settleMs > 0)) {
+// Files larger than one part go up in parts (S3 wants parts of at least 5 MiB; smaller only suits the local fake).
+const partBytes = Math.round(Number(values["part-mib"]) * 1024 * 1024);
+if (!token || !values.fitting || (!values.watch && !oneShot) || !(settleMs > 0) || !(partBytes > 0)) {
   console.error(USAGE);
   process.exit(2);
 }
@@ -54,6 +58,7 @@ async function uploadFiles(api: Api) {
     try {
       const { clip, sent } = await sendFile(api, {
         fittingId: values.fitting!, buildId: values.build!, view: values.view!, file, captureFps, consentConfirmed: values.consent!,
+        partBytes, parts: memoryPartsStore(),
       });
       ids.push(clip.id);
       console.log(`${path.basename(file)}\t${clip.id}\t${sent ? "queued" : `already there (${clip.originalName})`}`);
@@ -70,7 +75,7 @@ if (oneShot) {
   await uploadFiles(api);
 } else {
   const watcher = await watchFolder({
-    api, dir: path.resolve(values.watch!), fittingId: values.fitting!, captureFps, consentConfirmed: values.consent!, settleMs,
+    api, dir: path.resolve(values.watch!), fittingId: values.fitting!, captureFps, consentConfirmed: values.consent!, settleMs, partBytes,
     log: (line) => console.log(line),
   });
   for (const signal of ["SIGINT", "SIGTERM"] as const) {

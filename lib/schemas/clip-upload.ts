@@ -18,3 +18,17 @@ export const clipCreateSchema = z.object({
 });
 
 export const clipListQuery = z.object({ fittingId: z.string().uuid() });
+
+const partNumber = z.number().int().min(1).max(10_000);
+
+/** Presigned PUTs for parts of a large file; without `uploadId` a multipart upload is started. */
+export const clipPartsSchema = z.object({
+  uploadId: z.string().trim().min(1).max(1024).optional(),
+  partNumbers: z.array(partNumber).min(1).max(100),
+});
+
+/** Completion; a file sent in parts names its upload and every part's ETag. */
+export const clipCompleteSchema = z.object({
+  uploadId: z.string().trim().min(1).max(1024).optional(),
+  parts: z.array(z.object({ partNumber, etag: z.string().trim().min(1).max(200) })).min(1).max(10_000).optional(),
+}).refine((v) => (v.uploadId === undefined) === (v.parts === undefined), "uploadId and parts go together");

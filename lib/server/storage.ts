@@ -2,7 +2,8 @@ import "server-only";
 // The object store, reached only through the AWS SDK: s3rver locally, S3 or any
 // S3-compatible store in production. Browsers get short-lived presigned URLs, never keys.
 import {
-  DeleteObjectsCommand, GetObjectCommand, HeadObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client,
+  CompleteMultipartUploadCommand, CreateMultipartUploadCommand, DeleteObjectsCommand, GetObjectCommand, HeadObjectCommand,
+  ListObjectsV2Command, PutObjectCommand, S3Client, UploadPartCommand,
 } from "@aws-sdk/client-s3";
 import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
 import { env } from "@/lib/config/env";
@@ -40,6 +41,24 @@ export const clipKeys = (studioId: string, clipId: string) => {
 export async function presignUpload(key: string, contentType: string, sizeBytes: number, expiresInS = 15 * 60) {
   const command = new PutObjectCommand({ Bucket: bucket(), Key: key, ContentType: contentType, ContentLength: sizeBytes });
   return getSignedUrl(s3Public(), command, { expiresIn: expiresInS, signableHeaders: new Set(["content-type", "content-length"]) });
+}
+
+/** Large files go up in parts: the store's multipart upload, each part by its own presigned PUT. */
+export async function startMultipartUpload(key: string, contentType: string): Promise<string> {
+  const started = await s3().send(new CreateMultipartUploadCommand({ Bucket: bucket(), Key: key, ContentType: contentType }));
+  return started.UploadId!;
+}
+
+export async function presignUploadPart(key: string, uploadId: string, partNumber: number, expiresInS = 15 * 60) {
+  const command = new UploadPartCommand({ Bucket: bucket(), Key: key, UploadId: uploadId, PartNumber: partNumber });
+  return getSignedUrl(s3Public(), command, { expiresIn: expiresInS });
+}
+
+export async function finishMultipartUpload(key: string, uploadId: string, parts: { partNumber: number; etag: string }[]) {
+  await s3().send(new CompleteMultipartUploadCommand({
+    Bucket: bucket(), Key: key, UploadId: uploadId,
+    MultipartUpload: { Parts: [...parts].sort((a, b) => a.partNumber - b.partNumber).map((p) => ({ PartNumber: p.partNumber, ETag: p.etag })) },
+  }));
 }
 
 export async function presignDownload(key: string, expiresInS = 5 * 60) {

@@ -1,6 +1,6 @@
 // The capture computer's side of the clip API: register a file (with its SHA-256, so that the
 // server answers a file it already has with that clip), send it to the store by the presigned
-// URL, and complete it. Every step is retried with back-off on a dropped connection; since the
+// URL — a large file in parts, of which only the missing ones go again —, and complete it. Every step is retried with back-off on a dropped connection; since the
 // registration is keyed by the hash, the whole sequence can be repeated without a second clip.
 import { createHash } from "node:crypto";
 import { createReadStream } from "node:fs";
@@ -72,27 +72,81 @@ export async function sha256OfFile(file: string): Promise<string> {
   return hash.digest("hex");
 }
 
-/** Streams the file to a presigned URL with an exact Content-Length (the store refuses chunked bodies). */
-function putFile(upload: Upload, file: string, size: number): Promise<void> {
-  const url = new URL(upload.url);
-  const client = url.protocol === "https:" ? https : http;
+/**
+ * Streams bytes [start, end) of the file to a presigned URL with an exact Content-Length (the
+ * store refuses chunked bodies) and answers the store's ETag. A refusal is the store's word on
+ * that URL (expired, unknown upload): retryable, since the next attempt asks for fresh URLs.
+ */
+function putRange(url: string, headers: Record<string, string>, file: string, start: number, end: number): Promise<string> {
+  const target = new URL(url);
+  const client = target.protocol === "https:" ? https : http;
   return new Promise((resolve, reject) => {
-    const req = client.request(url, { method: "PUT", headers: { ...upload.headers, "content-length": String(size) } }, (res) => {
+    const req = client.request(target, { method: "PUT", headers: { ...headers, "content-length": String(end - start) } }, (res) => {
       res.resume();
       res.on("end", () => {
         const status = res.statusCode ?? 0;
-        if (status >= 200 && status < 300) resolve();
-        else reject(new UploadError(`the store refused ${path.basename(file)}: ${status}`, status === 403 ? 409 : status));
+        if (status >= 200 && status < 300) resolve(String(res.headers.etag ?? ""));
+        else reject(new UploadError(`the store refused ${path.basename(file)}: ${status}`, 409));
       });
     });
     req.on("error", (err) => reject(new UploadError(`sending ${path.basename(file)}: ${err.message}`)));
-    createReadStream(file).on("error", (err) => req.destroy(err)).pipe(req);
+    if (end === start) return void req.end();
+    createReadStream(file, { start, end: end - 1 }).on("error", (err) => req.destroy(err)).pipe(req);
   });
+}
+
+/** A multipart upload under way: its id and the ETag of every part the store has taken. */
+export type PartsProgress = { uploadId: string; etags: Record<string, string> };
+/** Where a sender keeps parts progress per clip, so that a restart sends only the missing parts. */
+export type PartsStore = { load(clipId: string): PartsProgress | undefined; save(clipId: string, progress: PartsProgress | undefined): Promise<void> };
+
+export function memoryPartsStore(): PartsStore {
+  const byClip = new Map<string, PartsProgress>();
+  return {
+    load: (clipId) => byClip.get(clipId),
+    save: async (clipId, progress) => void (progress ? byClip.set(clipId, progress) : byClip.delete(clipId)),
+  };
+}
+
+const PART_URLS_PER_CALL = 10; // presigned URLs live 15 min: ask for a few at a time
+
+async function sendParts(api: Api, clipId: string, input: SendInput, size: number) {
+  const { file, partBytes, parts: store } = input;
+  const count = Math.ceil(size / partBytes);
+  const progress: PartsProgress = store.load(clipId) ?? { uploadId: "", etags: {} };
+  const missing = Array.from({ length: count }, (_, i) => i + 1).filter((n) => !progress.etags[n]);
+  for (let i = 0; i < missing.length; i += PART_URLS_PER_CALL) {
+    const { uploadId, parts } = await api<{ uploadId: string; parts: { partNumber: number; url: string }[] }>(
+      "POST", `/api/clips/${clipId}/parts`, { uploadId: progress.uploadId || undefined, partNumbers: missing.slice(i, i + PART_URLS_PER_CALL) },
+    );
+    progress.uploadId = uploadId;
+    for (const part of parts) {
+      const start = (part.partNumber - 1) * partBytes;
+      try {
+        progress.etags[part.partNumber] = await putRange(part.url, {}, file, start, Math.min(size, start + partBytes));
+      } catch (err) {
+        // A store that no longer knows the upload (it expired or was cleaned up) means starting it over.
+        if (err instanceof UploadError && err.status === 409 && /: 404$/.test(err.message)) await store.save(clipId, undefined);
+        throw err;
+      }
+      await store.save(clipId, progress);
+      input.onPart?.(part.partNumber, count);
+    }
+  }
+  const parts = Object.entries(progress.etags).map(([n, etag]) => ({ partNumber: Number(n), etag }));
+  await api("POST", `/api/clips/${clipId}/complete`, { uploadId: progress.uploadId, parts }).catch(async (err: unknown) => {
+    if (err instanceof UploadError && err.status === 409) await store.save(clipId, undefined);
+    throw err;
+  });
+  await store.save(clipId, undefined);
 }
 
 export type SendInput = {
   fittingId: string; buildId: string; view: string; file: string; fileName?: string;
   captureFps?: number; consentConfirmed: boolean; sha256?: string;
+  /** A file larger than this goes up in parts of this size (the store wants at least 5 MiB but the last). */
+  partBytes: number; parts: PartsStore;
+  onPart?: (partNumber: number, count: number) => void;
 };
 
 /**
@@ -110,8 +164,12 @@ export async function sendFile(api: Api, input: SendInput, log?: (line: string) 
       consentConfirmed: input.consentConfirmed, contentSha256: sha256,
     });
     if (!upload) return { clip, duplicate, sent: false };
-    await putFile(upload, input.file, size);
-    await api("POST", `/api/clips/${clip.id}/complete`);
+    if (size > input.partBytes) {
+      await sendParts(api, clip.id, input, size);
+    } else {
+      await putRange(upload.url, upload.headers, input.file, 0, size);
+      await api("POST", `/api/clips/${clip.id}/complete`);
+    }
     return { clip, duplicate, sent: true };
   }, 10, log);
 }

@@ -11,18 +11,24 @@ import path from "node:path";
 import { setTimeout as sleep } from "node:timers/promises";
 import { watch } from "chokidar";
 import { VIEWS } from "@/lib/marks/types";
-import { CONTENT_TYPES, sendFile, sha256OfFile, UploadError, withRetry, type Api } from "./upload-client";
+import { CONTENT_TYPES, sendFile, sha256OfFile, UploadError, withRetry, type Api, type PartsProgress, type PartsStore } from "./upload-client";
 
 export const STATE_FILE = ".fitframe-sent.json";
 
 type View = (typeof VIEWS)[number];
-type FileState = { buildId: string; sha256?: string; size?: number; mtimeMs?: number; clipId?: string; sentAt?: string };
+type FileState = {
+  buildId: string; sha256?: string; size?: number; mtimeMs?: number; clipId?: string; sentAt?: string;
+  /** A file going up in parts: the parts the store has, so that a restart sends only the rest. */
+  parts?: PartsProgress & { clipId: string };
+};
 type State = Record<string, FileState>;
 
 export type WatchOptions = {
   api: Api; dir: string; fittingId: string; captureFps?: number; consentConfirmed: boolean;
   /** How long a file's size must stay the same before it counts as written. */
   settleMs: number;
+  /** Files larger than this go up in parts of this size. */
+  partBytes: number;
   log: (line: string) => void;
 };
 
@@ -121,9 +127,17 @@ export async function watchFolder(options: WatchOptions) {
     const entry = state[relative]!;
     const { size, mtimeMs } = await stat(absolute);
     const sha256 = await sha256OfFile(absolute);
+    const parts: PartsStore = {
+      load: (clipId) => (entry.parts?.clipId === clipId ? entry.parts : undefined),
+      save: async (clipId, progress) => {
+        entry.parts = progress ? { ...progress, clipId } : undefined;
+        await saveState();
+      },
+    };
     const { clip, duplicate, sent } = await sendFile(api, {
       fittingId, buildId: entry.buildId, view, file: absolute, fileName: path.basename(relative),
-      captureFps: options.captureFps, consentConfirmed: options.consentConfirmed, sha256,
+      captureFps: options.captureFps, consentConfirmed: options.consentConfirmed, sha256, partBytes: options.partBytes, parts,
+      onPart: (n, count) => log(`${relative}\tpart ${n}/${count}`),
     }, log);
     Object.assign(entry, { sha256, size, mtimeMs, clipId: clip.id, sentAt: new Date().toISOString() });
     await saveState();

@@ -3,12 +3,14 @@ import { and, asc, eq } from "drizzle-orm";
 import type { z } from "zod";
 import { db, schema } from "@/db";
 import { env } from "@/lib/config/env";
-import type { clipCreateSchema } from "@/lib/schemas/clip-upload";
+import type { clipCompleteSchema, clipCreateSchema, clipPartsSchema } from "@/lib/schemas/clip-upload";
 import type { SignedInActor } from "../access";
 import { ApiError } from "../http/errors";
 import { pgErrorCode } from "../pg-errors";
 import { enqueueClipProcessing } from "../queue";
-import { clipKeys, deleteKeys, objectSize, presignUpload } from "../storage";
+import {
+  clipKeys, deleteKeys, finishMultipartUpload, objectSize, presignUpload, presignUploadPart, startMultipartUpload,
+} from "../storage";
 import { loadClip } from "./clip-access";
 import { fittingForWrite, getFitting } from "./fittings";
 import { assertStrokeOfBuild } from "./strokes";
@@ -84,12 +86,37 @@ const pgConstraint = (err: unknown) =>
   ((err as { cause?: { constraint?: string } }).cause?.constraint ?? (err as { constraint?: string }).constraint);
 
 /**
+ * A large file goes up in parts: presigned PUTs for the part numbers asked, in the clip's one
+ * multipart upload (started here when no `uploadId` is given). The sender keeps the upload id
+ * and the parts' ETags, so after a dropped connection or a restart it sends only missing parts.
+ */
+export async function presignClipParts(actor: SignedInActor, clipId: string, input: z.infer<typeof clipPartsSchema>) {
+  const { clip } = await loadClip(actor, clipId, "golfer.write");
+  if (clip.state !== "awaiting_upload") throw new ApiError("conflict", "This clip's file has already arrived");
+  const uploadId = input.uploadId ?? (await startMultipartUpload(clip.objectKey, clip.contentType));
+  const parts = await Promise.all(input.partNumbers.map(async (partNumber) => ({
+    partNumber, url: await presignUploadPart(clip.objectKey, uploadId, partNumber),
+  })));
+  return { uploadId, parts };
+}
+
+/**
  * The browser says the upload is done: check the stored object (it must be there, with the
  * declared size) and queue processing once. A second call finds the clip queued and queues nothing.
+ * A file sent in parts is first put together from them.
  */
-export async function completeClipUpload(actor: SignedInActor, clipId: string) {
+export async function completeClipUpload(actor: SignedInActor, clipId: string, multipart: z.infer<typeof clipCompleteSchema> = {}) {
   const { clip } = await loadClip(actor, clipId, "golfer.write");
   if (clip.state !== "awaiting_upload") return { clip, queued: false };
+  if (multipart.uploadId && multipart.parts) {
+    await finishMultipartUpload(clip.objectKey, multipart.uploadId, multipart.parts).catch((err: unknown) => {
+      const status = (err as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
+      if (status !== undefined && status >= 400 && status < 500) {
+        throw new ApiError("conflict", `The store could not put the parts together (${(err as Error).name}): send the parts again`);
+      }
+      throw err;
+    });
+  }
   const size = await objectSize(clip.objectKey);
   if (size === null) throw new ApiError("conflict", "The upload has not arrived yet: send the file to the upload URL first");
   if (size !== clip.sizeBytes || size > env().UPLOAD_MAX_BYTES) {

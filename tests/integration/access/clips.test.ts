@@ -37,6 +37,8 @@ const cases: MatrixCase<W>[] = [
   { route: "GET /api/clips?fittingId=", request: (w, t) => ({ method: "GET", path: `/api/clips?fittingId=${golferOf(w, t).fitting.id}` }), expect: readGolfer },
   // The clip is already processed, so an allowed completion queues nothing and answers 200.
   { route: "POST /api/clips/{id}/complete", request: (w, t) => ({ method: "POST", path: `${clipPath(w, t)}/complete` }), expect: writeGolfer(200) },
+  // The clip's file has arrived, so an allowed request for part URLs is refused with 409.
+  { route: "POST /api/clips/{id}/parts", request: (w, t) => ({ method: "POST", path: `${clipPath(w, t)}/parts`, body: { partNumbers: [1, 2] } }), expect: writeGolfer(409) },
   { route: "GET /api/clips/{id}/frames/{n}", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/frames/3` }), expect: redirectTo(302) },
   { route: "GET /api/clips/{id}/media/poster", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/media/poster` }), expect: redirectTo(302) },
   { route: "GET /api/clips/{id}/media/proxy", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/media/proxy` }), expect: redirectTo(302) },

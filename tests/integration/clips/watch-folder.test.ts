@@ -3,7 +3,7 @@
 // camera sub-folder, only once they have stopped growing, and never twice (content hash).
 import { spawn, type ChildProcess } from "node:child_process";
 import { createHash } from "node:crypto";
-import { copyFile, mkdir, mkdtemp, open, readFile, stat } from "node:fs/promises";
+import { copyFile, mkdir, mkdtemp, open, readFile, stat, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { setTimeout as sleep } from "node:timers/promises";
@@ -20,9 +20,9 @@ type Watcher = { child: ChildProcess; lines: string[] };
 const running: Watcher[] = [];
 afterEach(() => running.forEach((w) => w.child.kill("SIGKILL")));
 
-async function startWatcher(dir: string, fittingId: string, token: string): Promise<Watcher> {
+async function startWatcher(dir: string, fittingId: string, token: string, extra: string[] = []): Promise<Watcher> {
   // One node process (tsx as a loader), so that a kill reaches the watcher itself.
-  const child = spawn(process.execPath, ["--import", "tsx", "scripts/upload.ts", "--watch", dir, "--fitting", fittingId, "--consent", "--settle-ms", "800"], {
+  const child = spawn(process.execPath, ["--import", "tsx", "scripts/upload.ts", "--watch", dir, "--fitting", fittingId, "--consent", "--settle-ms", "800", ...extra], {
     env: { ...process.env, FITFRAME_TOKEN: token, FITFRAME_URL: BASE },
     stdio: ["ignore", "pipe", "pipe"],
   });
@@ -49,7 +49,7 @@ async function lineMatching(w: Watcher, test: (line: string) => boolean, timeout
     await sleep(100);
   }
 }
-const sentLine = (w: Watcher, relative: string) => lineMatching(w, (l) => l.startsWith(`${relative}\t`) && !l.includes("\twaiting"));
+const sentLine = (w: Watcher, relative: string) => lineMatching(w, (l) => l.startsWith(`${relative}\t`) && /\t(sent|already there)/.test(l));
 
 /** Writes a file in six pieces 300 ms apart, as a camera does while it records. */
 async function writeSlowly(from: string, to: string) {
@@ -169,4 +169,47 @@ it("finishes a file whose upload broke off, into the clip it was registered as",
   expect(rows.map((r) => [r.id, r.state])).toEqual([[registered.body.clip.id, "ready"]]);
   // Once processed, the same content is answered with no upload at all.
   expect((await call(auth, "POST", "/api/clips", body)).body).toMatchObject({ duplicate: true, upload: null });
+});
+
+it("sends a large file in parts and, after a restart, only the parts the store does not have", { timeout: 60_000 }, async () => {
+  const w = await makeWorld();
+  const token = await tokenFor(w.fitter.id);
+  const auth = { token: token.value };
+  const dir = await mkdtemp(path.join(tmpdir(), "fitframe-watch-"));
+  await mkdir(path.join(dir, "overhead"));
+  const relative = path.join("overhead", "big.mp4");
+  const file = path.join(dir, relative);
+  await generateClip(file, { ...small, faceAngleAddressDeg: 2, faceAngleImpactDeg: 0, startDirectionDeg: 0, seed: 5 });
+  const bytes = await readFile(file);
+  const partBytes = Math.ceil(bytes.length / 4); // four parts (S3's 5 MiB minimum is not the fake store's)
+  expect((await call(auth, "PUT", `/api/fittings/${w.own.fitting.id}/recording`, { buildId: w.own.build.id })).status).toBe(200);
+
+  // A watcher got as far as part 1 before it was killed: the clip, the upload and that part exist.
+  const registered = await call(auth, "POST", "/api/clips", {
+    fittingId: w.own.fitting.id, buildId: w.own.build.id, view: "overhead", fileName: "big.mp4", contentType: "video/mp4",
+    sizeBytes: bytes.length, consentConfirmed: true, contentSha256: createHash("sha256").update(bytes).digest("hex"),
+  });
+  const clipId = registered.body.clip.id as string;
+  const started = await call(auth, "POST", `/api/clips/${clipId}/parts`, { partNumbers: [1] });
+  expect(started.status).toBe(200);
+  const put = await fetch(started.body.parts[0].url, { method: "PUT", body: bytes.subarray(0, partBytes) });
+  expect(put.status).toBe(200);
+  await writeFile(path.join(dir, ".fitframe-sent.json"), JSON.stringify({
+    [relative]: { buildId: w.own.build.id, parts: { clipId, uploadId: started.body.uploadId, etags: { 1: put.headers.get("etag") } } },
+  }));
+
+  const watcher = await startWatcher(dir, w.own.fitting.id, token.value, ["--part-mib", String(partBytes / 1024 / 1024)]);
+  const line = await sentLine(watcher, relative);
+  expect(line).toContain(`\t${clipId}\t`);
+  expect(watcher.lines.filter((l) => l.startsWith(`${relative}\tpart `))).toEqual([2, 3, 4].map((n) => `${relative}\tpart ${n}/4`));
+
+  // The parts made the whole file: the store holds every byte and the worker reads all 60 frames.
+  let clip: { state: string; frameCount: number | null } | undefined;
+  for (const until = Date.now() + 30_000; Date.now() < until; await sleep(500)) {
+    clip = (await call(auth, "GET", `/api/clips?fittingId=${w.own.fitting.id}`)).body.clips[0];
+    if (clip?.state === "ready" || clip?.state === "failed") break;
+  }
+  expect(clip).toMatchObject({ state: "ready", frameCount: 60 });
+  const [stored] = await db.select().from(schema.clips).where(eq(schema.clips.id, clipId));
+  expect(stored!.sizeBytes).toBe(bytes.length);
 });
