@@ -17,7 +17,7 @@ export const STATE_FILE = ".fitframe-sent.json";
 
 type View = (typeof VIEWS)[number];
 type FileState = {
-  buildId: string; sha256?: string; size?: number; mtimeMs?: number; clipId?: string; sentAt?: string;
+  fittingId: string; buildId: string; sha256?: string; size?: number; mtimeMs?: number; clipId?: string; sentAt?: string;
   /** A file going up in parts: the parts the store has, so that a restart sends only the rest. */
   parts?: PartsProgress & { clipId: string };
 };
@@ -51,11 +51,12 @@ export async function watchFolder(options: WatchOptions) {
   let saving = Promise.resolve();
   const saveState = () => {
     // Written whole to a temporary file and renamed, so a kill mid-write leaves the old state.
-    saving = saving.then(async () => {
+    const write = saving.then(async () => {
       await writeFile(`${statePath}.tmp`, JSON.stringify(state, null, 1));
       await rename(`${statePath}.tmp`, statePath);
     });
-    return saving;
+    saving = write.catch(() => undefined); // one failed write must not stop the later ones
+    return write;
   };
 
   /** The recording build now; while none is set, asks again every 2 s. */
@@ -101,15 +102,24 @@ export async function watchFolder(options: WatchOptions) {
     try {
       const known = state[relative];
       const { size, mtimeMs } = await stat(absolute);
-      if (known?.clipId && known.size === size && known.mtimeMs === mtimeMs) return;
+      const sameFile = known?.clipId !== undefined && known.size === size && known.mtimeMs === mtimeMs;
+      // A folder kept from an earlier fitting: its files are that golfer's, never caught up into this one.
+      if (known && known.fittingId !== fittingId && (sameFile || !known.clipId)) {
+        if (!sameFile) log(`${relative}\tleft alone: it appeared during fitting ${known.fittingId}`);
+        return;
+      }
+      if (sameFile) return;
       // The build is fixed when the file appears, before it has finished writing; a file that
-      // appeared while the watcher was down goes to the build recording now.
-      if (!known) {
-        state[relative] = { buildId: await recordingBuild(relative) };
+      // appeared while the watcher was down, or a new file under a name used before, goes to the
+      // build recording now.
+      if (!known || known.clipId) {
+        state[relative] = { fittingId, buildId: await recordingBuild(relative) };
         await saveState();
       }
       await stoppedGrowing(absolute);
-      await (sending = sending.then(() => send(absolute, relative, view)));
+      const job = sending.then(() => send(absolute, relative, view));
+      sending = job.catch(() => undefined); // a file that fails must not hold up the next
+      await job;
     } catch (err) {
       if (err instanceof UploadError && err.retryable) {
         // The server or the network is still away after the back-off: keep trying while running.

@@ -51,6 +51,14 @@ async function lineMatching(w: Watcher, test: (line: string) => boolean, timeout
 }
 const sentLine = (w: Watcher, relative: string) => lineMatching(w, (l) => l.startsWith(`${relative}\t`) && /\t(sent|already there)/.test(l));
 
+/** The fitting's clips once none is still on its way (ready or failed), or as they are at the deadline. */
+async function settledClips<T extends { state: string }>(auth: { token: string }, fittingId: string, timeoutMs = 30_000): Promise<T[]> {
+  for (const until = Date.now() + timeoutMs; ; await sleep(500)) {
+    const rows: T[] = (await call(auth, "GET", `/api/clips?fittingId=${fittingId}`)).body.clips;
+    if (Date.now() > until || (rows.length > 0 && rows.every((r) => r.state === "ready" || r.state === "failed"))) return rows;
+  }
+}
+
 /** Writes a file in six pieces 300 ms apart, as a camera does while it records. */
 async function writeSlowly(from: string, to: string) {
   const bytes = await readFile(from);
@@ -117,11 +125,7 @@ it("uploads each finished file into the recording build once, also across a rest
 
   // Three clips, in the builds that were recording when they appeared, each with its camera's view.
   type Row = { id: string; buildId: string; view: string; state: string; originalName: string; frameCount: number | null };
-  let rows: Row[] = [];
-  for (const until = Date.now() + 45_000; Date.now() < until; await sleep(500)) {
-    rows = (await call(auth, "GET", `/api/clips?fittingId=${w.own.fitting.id}`)).body.clips;
-    if (rows.every((r) => r.state === "ready" || r.state === "failed")) break;
-  }
+  const rows = await settledClips<Row>(auth, w.own.fitting.id, 45_000);
   const summary = rows.map((r) => [r.originalName, r.buildId, r.view, r.state]).sort((a, b) => a[0]!.localeCompare(b[0]!));
   expect(summary).toEqual([
     ["putt-1.mp4", w.own.build.id, "overhead", "ready"],
@@ -132,6 +136,14 @@ it("uploads each finished file into the recording build once, also across a rest
   const [stored] = await db.select().from(schema.clips).where(eq(schema.clips.id, rows.find((r) => r.originalName === "putt-2.mp4")!.id));
   expect(stored!.sizeBytes).toBe((await stat(clipB)).size);
   expect(stored!.frameCount).toBe(60);
+  // The same folder watched for the next golfer's fitting: the earlier golfer's putts stay out of it.
+  second.child.kill("SIGKILL");
+  expect((await call(auth, "PUT", `/api/fittings/${w.sibling.fitting.id}/recording`, { buildId: w.sibling.build.id })).status).toBe(200);
+  const nextFitting = await startWatcher(dir, w.sibling.fitting.id, token.value);
+  await sleep(1500);
+  expect(nextFitting.lines).toEqual([`watching ${dir} for fitting ${w.sibling.fitting.id}`]);
+  expect((await call(auth, "GET", `/api/clips?fittingId=${w.sibling.fitting.id}`)).body.clips).toEqual([]);
+  nextFitting.child.kill("SIGKILL");
   // The state file remembers every file it sent.
   const state = JSON.parse(await readFile(path.join(dir, ".fitframe-sent.json"), "utf8"));
   expect(Object.keys(state).sort()).toEqual([path.join("down-the-line", "putt-3.mp4"), path.join("face-on", "putt-2.mp4"), path.join("overhead", "putt-1-copy.mp4"), path.join("overhead", "putt-1.mp4"), "putt-2_face-on_again.mp4"]);
@@ -161,11 +173,7 @@ it("finishes a file whose upload broke off, into the clip it was registered as",
   const line = await sentLine(watcher, path.join("overhead", "putt.mp4"));
   expect(line).toContain(`\t${registered.body.clip.id}\t`);
   expect(line).toContain("finished an upload that had broken off");
-  let rows: { id: string; state: string }[] = [];
-  for (const until = Date.now() + 30_000; Date.now() < until; await sleep(500)) {
-    rows = (await call(auth, "GET", `/api/clips?fittingId=${w.own.fitting.id}`)).body.clips;
-    if (rows.every((r) => r.state === "ready" || r.state === "failed")) break;
-  }
+  const rows = await settledClips<{ id: string; state: string }>(auth, w.own.fitting.id);
   expect(rows.map((r) => [r.id, r.state])).toEqual([[registered.body.clip.id, "ready"]]);
   // Once processed, the same content is answered with no upload at all.
   expect((await call(auth, "POST", "/api/clips", body)).body).toMatchObject({ duplicate: true, upload: null });
@@ -195,7 +203,7 @@ it("sends a large file in parts and, after a restart, only the parts the store d
   const put = await fetch(started.body.parts[0].url, { method: "PUT", body: bytes.subarray(0, partBytes) });
   expect(put.status).toBe(200);
   await writeFile(path.join(dir, ".fitframe-sent.json"), JSON.stringify({
-    [relative]: { buildId: w.own.build.id, parts: { clipId, uploadId: started.body.uploadId, etags: { 1: put.headers.get("etag") } } },
+    [relative]: { fittingId: w.own.fitting.id, buildId: w.own.build.id, parts: { clipId, uploadId: started.body.uploadId, etags: { 1: put.headers.get("etag") } } },
   }));
 
   const watcher = await startWatcher(dir, w.own.fitting.id, token.value, ["--part-mib", String(partBytes / 1024 / 1024)]);
@@ -204,11 +212,7 @@ it("sends a large file in parts and, after a restart, only the parts the store d
   expect(watcher.lines.filter((l) => l.startsWith(`${relative}\tpart `))).toEqual([2, 3, 4].map((n) => `${relative}\tpart ${n}/4`));
 
   // The parts made the whole file: the store holds every byte and the worker reads all 60 frames.
-  let clip: { state: string; frameCount: number | null } | undefined;
-  for (const until = Date.now() + 30_000; Date.now() < until; await sleep(500)) {
-    clip = (await call(auth, "GET", `/api/clips?fittingId=${w.own.fitting.id}`)).body.clips[0];
-    if (clip?.state === "ready" || clip?.state === "failed") break;
-  }
+  const [clip] = await settledClips<{ state: string; frameCount: number | null }>(auth, w.own.fitting.id);
   expect(clip).toMatchObject({ state: "ready", frameCount: 60 });
   const [stored] = await db.select().from(schema.clips).where(eq(schema.clips.id, clipId));
   expect(stored!.sizeBytes).toBe(bytes.length);
