@@ -1,6 +1,7 @@
 import { fitLine } from "@/lib/geometry/fit-line";
 import type { Vec2 } from "@/lib/geometry/vector";
 import { HAND_CLICK_PRECISION_PX, type StoredMark } from "@/lib/marks/types";
+import { seededNormal } from "@/lib/stats/random";
 
 /**
  * Uncertainty by a seeded Monte Carlo (JCGM 101:2008, "Propagation of distributions using a Monte
@@ -10,24 +11,6 @@ import { HAND_CLICK_PRECISION_PX, type StoredMark } from "@/lib/marks/types";
  */
 export const MONTE_CARLO_RUNS = 64;
 const SEED = 0x5eed;
-
-/** Mulberry32, a small seeded 32-bit generator (T. Ettinger, public domain): uniform in [0, 1). */
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-/** Standard normal deviates by the Box–Muller transform (Box & Muller 1958). */
-function normalSource(seed: number): () => number {
-  const uniform = mulberry32(seed);
-  return () => Math.sqrt(-2 * Math.log(1 - uniform())) * Math.cos(2 * Math.PI * uniform());
-}
 
 /**
  * Each mark's point precision (px): its own, or the stated hand-click default. A track's points
@@ -62,7 +45,7 @@ function perpendicularScatter(points: Vec2[]): number | null {
 /** The marks with every point moved by noise of its precision; one call per Monte Carlo run. */
 export function perturbations(marks: readonly StoredMark[], runs = MONTE_CARLO_RUNS): StoredMark[][] {
   const precision = pointPrecisions(marks);
-  const normal = normalSource(SEED);
+  const normal = seededNormal(SEED);
   return Array.from({ length: runs }, () =>
     marks.map((m) => {
       const sigma = precision.get(m.id) as number;

@@ -1,6 +1,7 @@
 // Grey test scenes drawn in plain arithmetic: each shape anti-aliased by its signed distance
 // (a pixel's cover = ½ − distance from its centre, clamped to [0, 1]), as the clip fixtures do.
 import type { GreyImage } from "@/lib/tracking/image";
+import { seededUniform } from "@/lib/stats/random";
 
 export type Scene = { width: number; height: number; background: number; noise?: { seed: number; sd: number } };
 
@@ -61,14 +62,5 @@ export class Canvas {
   }
 }
 
-/** Deterministic pseudo-random numbers in [0, 1) (mulberry32). */
-export function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** Deterministic pseudo-random numbers in [0, 1). */
+export const random = seededUniform;
