@@ -1,6 +1,6 @@
 "use client";
 // The comparison's plots (recharts): face angle per putt, face against path, start directions as a fan.
-import { CartesianGrid, Legend, ReferenceArea, ReferenceDot, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis } from "recharts";
+import { CartesianGrid, ErrorBar, Legend, ReferenceArea, ReferenceDot, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis } from "recharts";
 import { METRES_PER_FOOT } from "@/lib/physics/units";
 import { seriesOf, type ComparisonReply } from "./types";
 
@@ -11,7 +11,7 @@ export function FacePerPuttPlot({ data }: Props) {
   const w = data.windows.face_angle_impact;
   return (
     <figure className="card">
-      <figcaption className="field-label">Face angle at impact, putt by putt (° , + open)</figcaption>
+      <figcaption className="field-label">Face angle at impact, putt by putt (° , + open; whiskers ± one standard error)</figcaption>
       <ResponsiveContainer width="100%" height={260}>
         <ScatterChart margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
           <CartesianGrid stroke="#ECE9E1" />
@@ -21,7 +21,10 @@ export function FacePerPuttPlot({ data }: Props) {
           <Tooltip />
           <Legend />
           {data.builds.map((b, i) => (
-            <Scatter key={b.buildId} name={b.label} data={b.putts.filter((p) => p.face !== null)} fill={seriesOf(i).color} shape={seriesOf(i).shape} line />
+            <Scatter key={b.buildId} name={b.label} data={b.putts.filter((p) => p.face !== null)} fill={seriesOf(i).color} shape={seriesOf(i).shape} line>
+              {/* Each putt's own ± (one standard error) as a whisker. */}
+              <ErrorBar dataKey="faceUncertainty" direction="y" width={4} stroke={seriesOf(i).color} />
+            </Scatter>
           ))}
         </ScatterChart>
       </ResponsiveContainer>
@@ -41,7 +44,10 @@ export function FaceVsPathPlot({ data }: Props) {
           <Tooltip />
           <Legend />
           {data.builds.map((b, i) => (
-            <Scatter key={b.buildId} name={b.label} data={b.putts.filter((p) => p.face !== null && p.path !== null)} fill={seriesOf(i).color} shape={seriesOf(i).shape} />
+            <Scatter key={b.buildId} name={b.label} data={b.putts.filter((p) => p.face !== null && p.path !== null)} fill={seriesOf(i).color} shape={seriesOf(i).shape}>
+              <ErrorBar dataKey="faceUncertainty" direction="y" width={4} stroke={seriesOf(i).color} />
+              <ErrorBar dataKey="pathUncertainty" direction="x" width={4} stroke={seriesOf(i).color} />
+            </Scatter>
           ))}
         </ScatterChart>
       </ResponsiveContainer>

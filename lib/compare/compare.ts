@@ -13,8 +13,12 @@ export type KeyStats = {
   /** Standard error of the mean, spread / √n. */
   meanUncertainty: number | null;
 };
-/** One overhead putt's plotted numbers (null when not measured). */
-export type PuttPoint = { clipId: string; putt: number; face: number | null; path: number | null; start: number | null };
+/** One overhead putt's plotted numbers (null when not measured), each with its uncertainty (null when not known). */
+export type PuttPoint = {
+  clipId: string; putt: number;
+  face: number | null; path: number | null; start: number | null;
+  faceUncertainty: number | null; pathUncertainty: number | null; startUncertainty: number | null;
+};
 
 export type BuildComparison = {
   buildId: string;
@@ -76,9 +80,14 @@ export function compareBuilds(
         return { key, label: metricDefinition(key).label, unit, window, summary, noise, spread, meanUncertainty: spread === null ? null : spread / Math.sqrt(summary.n) };
       });
     const value = (clipId: string, key: string) => byClip.get(clipId)?.get(key)?.value ?? null;
+    const uncertainty = (clipId: string, key: string) => (value(clipId, key) === null ? null : (byClip.get(clipId)?.get(key)?.uncertainty ?? null));
     const plotted = own
       .filter((c) => c.view === "overhead")
-      .map((c, i) => ({ clipId: c.id, putt: i + 1, face: value(c.id, "face_angle_impact"), path: value(c.id, "path"), start: value(c.id, "start_direction") }));
+      .map((c, i) => ({
+        clipId: c.id, putt: i + 1,
+        face: value(c.id, "face_angle_impact"), path: value(c.id, "path"), start: value(c.id, "start_direction"),
+        faceUncertainty: uncertainty(c.id, "face_angle_impact"), pathUncertainty: uncertainty(c.id, "path"), startUncertainty: uncertainty(c.id, "start_direction"),
+      }));
     const start = stats.find((s) => s.key === "start_direction");
     const make = makeChances(start ? { ...start.summary, sd: start.spread } : null);
     return { buildId: build.id, label: build.label, isBaseline: build.isBaseline, clipCount: own.length, stats, make, putts: plotted };

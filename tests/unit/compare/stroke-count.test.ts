@@ -33,5 +33,8 @@ describe("a two-view stroke in the comparison", () => {
     expect(face.summary.sd).toBeCloseTo(0.1, 12);
     expect(face.spread).toBeCloseTo(0.5, 12);
     expect(face.meanUncertainty).toBeCloseTo(0.5 / Math.sqrt(3), 12);
+    // The plots draw each putt with its own ±.
+    const putts = compareBuilds([build], clips, measurements, {}).builds[0]!.putts;
+    expect(putts.map((p) => [p.face, p.faceUncertainty, p.path, p.pathUncertainty])).toEqual([[0, 0.5, null, null], [0.1, 0.5, null, null], [0.2, 0.5, null, null]]);
   });
 });
