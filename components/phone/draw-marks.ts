@@ -2,21 +2,18 @@
 import { ROLE_LOOK } from "@/components/review/roles-look";
 import type { MarkRole } from "@/lib/marks/types";
 
-/** `proposal`: a tracked mark the fitter has not accepted yet, drawn quieter (LOOK.md, "Proposals"). */
-export type PlayerMark = { id: string; frame: number; kind: string; role: MarkRole | string; points: [number, number][]; proposal?: boolean };
+export type PlayerMark = { id: string; frame: number; kind: string; role: MarkRole | string; points: [number, number][] };
 type Transform = { scale: number; offsetX: number; offsetY: number; ratio: number };
 
 const lookOf = (role: string) => ROLE_LOOK[role as MarkRole] ?? { colour: "#FFFFFF", letter: "?", label: role };
 
-function handle(ctx: CanvasRenderingContext2D, x: number, y: number, colour: string, letter: string | null, ratio: number, hollow: boolean) {
+function handle(ctx: CanvasRenderingContext2D, x: number, y: number, colour: string, letter: string | null, ratio: number) {
   ctx.beginPath();
   ctx.arc(x, y, 5 * ratio, 0, Math.PI * 2);
-  if (!hollow) {
-    ctx.fillStyle = colour;
-    ctx.fill();
-  }
+  ctx.fillStyle = colour;
+  ctx.fill();
   ctx.lineWidth = 1.5 * ratio;
-  ctx.strokeStyle = hollow ? colour : "#0E1A24";
+  ctx.strokeStyle = "#0E1A24";
   ctx.stroke();
   if (letter) {
     ctx.font = `600 ${10 * ratio}px system-ui, sans-serif`;
@@ -36,8 +33,7 @@ export function drawMarks(ctx: CanvasRenderingContext2D, marks: { mark: PlayerMa
   for (const { mark, opacity } of marks) {
     const { colour, letter } = lookOf(mark.role);
     const pts = mark.points.map(at);
-    ctx.globalAlpha = opacity * (mark.proposal ? 0.65 : 1);
-    ctx.setLineDash(mark.proposal ? [6 * t.ratio, 4 * t.ratio] : []);
+    ctx.globalAlpha = opacity;
     if (pts.length >= 2) {
       ctx.beginPath();
       ctx.moveTo(...pts[0]!);
@@ -47,8 +43,7 @@ export function drawMarks(ctx: CanvasRenderingContext2D, marks: { mark: PlayerMa
       ctx.strokeStyle = colour;
       ctx.stroke();
     }
-    ctx.setLineDash([]);
-    pts.forEach((p, i) => handle(ctx, p[0], p[1], colour, i === 0 ? letter : null, t.ratio, mark.proposal === true));
+    pts.forEach((p, i) => handle(ctx, p[0], p[1], colour, i === 0 ? letter : null, t.ratio));
   }
   ctx.globalAlpha = 1;
 }

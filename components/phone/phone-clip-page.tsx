@@ -1,6 +1,5 @@
 // The clip page shared by the golfer (/me/clips/[id]) and the coach (/studio/coach/clips/[id]).
 import Link from "next/link";
-import { isProposal } from "@/lib/review/marks";
 import type { SignedInActor } from "@/lib/server/access";
 import type { PhoneClip } from "@/lib/server/dal/golfer-clips";
 import type { PlayerMark } from "./draw-marks";
@@ -14,7 +13,6 @@ export function PhoneClipPage({ data, actor, back }: { data: PhoneClip; actor: S
   const ready = clip.state === "ready" && clip.width && clip.height && clip.frameCount;
   // Dates cross to the client as strings.
   const initial = JSON.parse(JSON.stringify({ captureFps: comments.captureFps, threads: comments.threads }));
-  const acceptedAt = typeof clip.tracking?.acceptedAt === "string" ? clip.tracking.acceptedAt : null;
   return (
     <div className="mx-auto flex w-full max-w-xl flex-col gap-4">
       <header>
@@ -24,7 +22,7 @@ export function PhoneClipPage({ data, actor, back }: { data: PhoneClip; actor: S
       {ready ? (
         <PhoneClipView
           clip={{ id: clip.id, width: clip.width!, height: clip.height!, frameCount: clip.frameCount!, captureFps: clip.captureFps, slowMotionFactor: clip.slowMotionFactor, moments: clip.moments }}
-          marks={marks.map((m) => ({ id: m.id, frame: m.frame, kind: m.kind, role: m.role, points: m.points as [number, number][], proposal: isProposal(m, acceptedAt) }))}
+          marks={marks.map((m) => ({ id: m.id, frame: m.frame, kind: m.kind, role: m.role, points: m.points as [number, number][] }))}
           comments={initial}
           viewer={{ userId: actor.userId, role: actor.role }}
         >

@@ -35,11 +35,21 @@ export async function getPhoneFitting(actor: SignedInActor, fittingId: string) {
 
 export type PhoneFitting = Awaited<ReturnType<typeof getPhoneFitting>>;
 
+/**
+ * The marks a golfer or coach replays: the fitter's own, and the tracker's proposals only once the
+ * fitter has accepted them (and tracking is on) — unconfirmed proposals are the fitter's working state.
+ */
+async function confirmedMarks(actor: SignedInActor, clip: Awaited<ReturnType<typeof getClip>>) {
+  const accepted = clip.trackingEnabled && typeof clip.tracking?.acceptedAt === "string";
+  const { marks } = await listMarks(actor, clip.id);
+  return marks.filter((m) => m.source === "hand" || accepted);
+}
+
 /** One clip for the phone player: timing, moments, marks, measurements, comments. */
 export async function getPhoneClip(actor: SignedInActor, clipId: string) {
   const clip = await getClip(actor, clipId);
-  const [{ marks }, { measurements }, comments, [build]] = await Promise.all([
-    listMarks(actor, clipId),
+  const [marks, { measurements }, comments, [build]] = await Promise.all([
+    confirmedMarks(actor, clip),
     listMeasurements(actor, clipId),
     listComments(actor, clipId),
     db.select({ label: builds.label, isBaseline: builds.isBaseline }).from(builds).where(eq(builds.id, clip.buildId)),
@@ -64,9 +74,9 @@ export async function getComparePair(actor: SignedInActor, fittingId: string, pi
   const b = ready.find((c) => c.id === pick.b) ?? latestOf(chosen?.id, a?.view ?? pick.view);
   if (!a || !b) return { pair: null, choices: ready.map((c) => ({ id: c.id, view: c.view, buildLabel: c.build.label })) };
   const [clipA, clipB] = await Promise.all([getClip(actor, a.id), getClip(actor, b.id)]);
-  const [marksA, marksB] = await Promise.all([listMarks(actor, a.id), listMarks(actor, b.id)]);
+  const [marksA, marksB] = await Promise.all([confirmedMarks(actor, clipA), confirmedMarks(actor, clipB)]);
   return {
-    pair: { a: { clip: clipA, marks: marksA.marks, buildLabel: a.build.label }, b: { clip: clipB, marks: marksB.marks, buildLabel: b.build.label } },
+    pair: { a: { clip: clipA, marks: marksA, buildLabel: a.build.label }, b: { clip: clipB, marks: marksB, buildLabel: b.build.label } },
     choices: ready.map((c) => ({ id: c.id, view: c.view, buildLabel: c.build.label })),
   };
 }
