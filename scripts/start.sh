@@ -34,10 +34,12 @@ start_payments_fake
 node --conditions=react-server --import tsx scripts/seed.ts
 spawn worker node --conditions=react-server --import tsx workers/index.ts
 if [ $DEV = 1 ]; then
+  refuse_taken_port "$WEB_PORT" web
   spawn web node node_modules/next/dist/bin/next dev -p "$WEB_PORT" -H 127.0.0.1
 else
   log "building the web app"
   node node_modules/next/dist/bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -40 "$DATA_DIR/build.log"; exit 1; }
+  refuse_taken_port "$WEB_PORT" web
   spawn web node node_modules/next/dist/bin/next start -p "$WEB_PORT" -H 127.0.0.1
 fi
 wait_for_port "$WEB_PORT" web

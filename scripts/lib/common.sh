@@ -55,6 +55,7 @@ start_postgres() {
   if runuser -u postgres -- "$PGBIN/pg_ctl" -D "$pgdata" status >/dev/null 2>&1; then
     log "PostgreSQL already running"
   else
+    refuse_taken_port "$port" postgres
     runuser -u postgres -- "$PGBIN/pg_ctl" -D "$pgdata" -l "$DATA_DIR/postgres.log" \
       -o "-p $port -c listen_addresses=127.0.0.1 -k $sock" -w start >/dev/null
     log "PostgreSQL on 127.0.0.1:$port"
@@ -97,6 +98,16 @@ spawn() {
   echo "$!" >"$DATA_DIR/$name.pid"
 }
 
+# Refuses to start a service on a port something else already holds: talking to another stack's
+# service (npm start's beside npm test's) would give wrong answers instead of an error.
+refuse_taken_port() {
+  local port="$1" name="$2"
+  if node -e 'const s=require("net").connect(+process.argv[1],"127.0.0.1");s.on("connect",()=>process.exit(0));s.on("error",()=>process.exit(1))' "$port"; then
+    log "port $port (for $name) is already in use by another program; stop it or choose another slot (FITFRAME_TEST_SLOT)"
+    exit 1
+  fi
+}
+
 wait_for_port() {
   local port="$1" name="$2" tries=0
   until node -e 'const s=require("net").connect(+process.argv[1],"127.0.0.1");s.on("connect",()=>process.exit(0));s.on("error",()=>process.exit(1))' "$port"; do
@@ -117,6 +128,7 @@ start_object_store() {
   local port="$1" bucket="$2" origin="$3"
   mkdir -p "$DATA_DIR/s3"
   sed "s#__ORIGIN__#$origin#" "$ROOT/scripts/lib/s3-cors.xml" > "$DATA_DIR/s3-cors.xml"
+  refuse_taken_port "$port" s3
   spawn s3 node "$ROOT/node_modules/s3rver/bin/s3rver.js" -d "$DATA_DIR/s3" -a 127.0.0.1 -p "$port" \
     --configure-bucket "$bucket" "$DATA_DIR/s3-cors.xml"
   wait_for_port "$port" s3
@@ -124,6 +136,8 @@ start_object_store() {
 }
 
 start_mail_catcher() {
+  refuse_taken_port "$SMTP_PORT" "mail (SMTP)"
+  refuse_taken_port "$MAIL_HTTP_PORT" mail
   spawn mail node --import tsx "$ROOT/scripts/mail-catcher.ts"
   wait_for_port "$MAIL_HTTP_PORT" mail
   log "mail catcher: SMTP 127.0.0.1:$SMTP_PORT, messages at http://127.0.0.1:$MAIL_HTTP_PORT/messages"
@@ -133,6 +147,7 @@ start_mail_catcher() {
 start_payments_fake() {
   export PAYMENTS_PORT="${PAYMENTS_PORT:-4242}"
   export STRIPE_API_PORT="${STRIPE_API_PORT:-$PAYMENTS_PORT}"
+  refuse_taken_port "$PAYMENTS_PORT" payments
   spawn payments node --import tsx "$ROOT/scripts/payments-fake.ts"
   wait_for_port "$PAYMENTS_PORT" payments
   log "payments fake on 127.0.0.1:$PAYMENTS_PORT"
