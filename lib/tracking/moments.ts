@@ -14,10 +14,11 @@ export const CONFIRM_FRAMES = 10;
 
 /**
  * `displacement[f]`: distance of the ball's centre on frame f from its rest position, px
- * (null when the ball was not found on that frame, e.g. blurred away). The ball has moved at
- * frame f when displacement exceeds the threshold from f on and, within CONFIRM_FRAMES, reaches
- * `confirmPx` (or the ball is lost): a shadow edge sweeping over the ball shifts its fitted
- * centre a little and gives it back, a struck ball keeps going. Returns impact = that f − 1, or
+ * (null when the ball was not found on that frame, e.g. blurred away or in deep shadow). The ball
+ * has moved at frame f when displacement exceeds the threshold from f on and, within
+ * CONFIRM_FRAMES, reaches `confirmPx`, or, seen clearly moving (twice the threshold), is not
+ * found again on any of those frames (gone for good): a shadow sweeping over the ball shifts its fitted centre a little, may hide
+ * it for a while, and gives it back; a struck ball keeps going. Returns impact = that f − 1, or
  * null when the ball never moves (or the series ends before a move is confirmed).
  */
 export function impactFromBall(displacement: readonly (number | null)[], jitterPx = 0, confirmPx = 0): number | null {
@@ -26,9 +27,14 @@ export function impactFromBall(displacement: readonly (number | null)[], jitterP
   for (let f = 1; f < displacement.length - 1; f++) {
     const d = displacement[f];
     if (d === null || d === undefined || d <= threshold) continue;
+    let lost = 0, farthest = d;
     for (let g = f + 1; g < Math.min(displacement.length, f + CONFIRM_FRAMES + 1); g++) {
       const v = displacement[g];
-      if (v === null || v === undefined) return f - 1;
+      if (v === null || v === undefined) {
+        if (++lost === CONFIRM_FRAMES && farthest >= 2 * threshold) return f - 1;
+        continue;
+      }
+      farthest = Math.max(farthest, v);
       if (v <= threshold) break;
       if (v >= confirm) return f - 1;
     }

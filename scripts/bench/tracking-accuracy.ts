@@ -11,7 +11,8 @@
  *
  * Needs no web stack: `npx tsx scripts/bench/tracking-accuracy.ts` (`npm run bench` runs it too).
  * BENCH_TRACKING_CLIPS=12 for a quicker look; BENCH_TRACKING_SEED to draw another set;
- * BENCH_TRACKING_VERBOSE=1 prints every clip.
+ * BENCH_TRACKING_VERBOSE=1 prints every clip; BENCH_TRACKING_ONLY=3,16 measures only those clips
+ * of the set (verbose), to look into one.
  */
 import { execFileSync } from "node:child_process";
 import { mkdtemp, rm } from "node:fs/promises";
@@ -27,7 +28,8 @@ import { trackClipFile } from "@/workers/tracking/track-clip";
 
 const CLIPS = Number(process.env.BENCH_TRACKING_CLIPS ?? 50);
 const SEED = Number(process.env.BENCH_TRACKING_SEED ?? 2026);
-const VERBOSE = process.env.BENCH_TRACKING_VERBOSE === "1";
+const ONLY = process.env.BENCH_TRACKING_ONLY ? new Set(process.env.BENCH_TRACKING_ONLY.split(",").map(Number)) : null;
+const VERBOSE = process.env.BENCH_TRACKING_VERBOSE === "1" || ONLY !== null;
 
 /** The issue's goals: absolute (deg) or relative (%) error. */
 const GOALS: Record<string, { limit: number; relative: boolean }> = {
@@ -242,7 +244,7 @@ function report(results: ClipResult[], wallSeconds: number): void {
 
 async function main(): Promise<void> {
   const dir = await mkdtemp(path.join(tmpdir(), "fitframe-bench-tracking-"));
-  const plans = plan(CLIPS, SEED);
+  const plans = plan(CLIPS, SEED).filter((p) => !ONLY || ONLY.has(p.index));
   const results: ClipResult[] = [];
   const started = performance.now();
   try {

@@ -52,6 +52,16 @@ type Candidate = {
   address: { frame: number; image: Uint8Array } | null;
 };
 
+/**
+ * A fit near the rest spot is the ball only when it looks like it did at rest: its size and at
+ * least half its contrast. Once the ball has gone, the head following through over its spot can
+ * make a ring of edges a circle fit accepts.
+ */
+function sameBall(fit: BallFit, rest: BallFit): boolean {
+  const contrast = rest.inside - rest.background;
+  return Math.abs(fit.r - rest.r) <= 0.15 * rest.r && (fit.inside - fit.background) / contrast >= 0.5;
+}
+
 export type TrackerOptions = { view: View };
 
 export class ClipTracker {
@@ -158,7 +168,7 @@ export class ClipTracker {
     let earliest: { c: Candidate; k: number } | null = null;
     for (const c of this.candidates) {
       const fit = fitBall(image, { x: c.rest.x, y: c.rest.y, r: c.rest.r });
-      c.displacement.push(fit ? Math.hypot(fit.x - c.rest.x, fit.y - c.rest.y) : null);
+      c.displacement.push(fit && sameBall(fit, c.rest) ? Math.hypot(fit.x - c.rest.x, fit.y - c.rest.y) : null);
       const { count: changed, mean } = this.changedNearBall(data, c.box);
       c.changed.push(changed);
       c.meanChange.push(mean);

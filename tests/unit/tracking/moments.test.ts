@@ -20,8 +20,14 @@ describe("impact from the ball's displacement", () => {
     expect(impactFromBall([0, 0, 0, 1, 2, 3], 0, 5)).toBeNull();
   });
 
-  it("counts a frame where the ball is lost (blurred away) as moved", () => {
-    expect(impactFromBall([0, 0, 0, 0, 3, null, null])).toBe(3);
+  it("counts a ball lost for good (blurred away, out of the picture) as moved, but not one a shadow hides for a while", () => {
+    const gone = [0, 0, 0, 0, 3, ...Array.from({ length: 10 }, () => null)];
+    expect(impactFromBall(gone)).toBe(3);
+    // Not decided while the ball might still come back.
+    expect(impactFromBall(gone.slice(0, 10))).toBeNull();
+    // A shadow creeping over the ball: the fit drifts, the ball is lost, then found at rest again.
+    const shaded = [0, 0, 0, 0.2, 0.4, 0.6, null, null, null, null, 0.3, 0.1, 0, 0, 0];
+    expect(impactFromBall(shaded)).toBeNull();
   });
 
   it("raises its threshold with the fit's jitter and finds nothing when the ball never moves", () => {
