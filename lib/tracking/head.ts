@@ -10,6 +10,7 @@
 import type { Vec2 } from "@/lib/geometry/vector";
 import { fitLineClipped, lineStdErrAt, pointOnLine, type LineFit } from "./fits";
 import { median, sampleBilinear, type GreyImage, type PixelBox } from "./image";
+import type { Sampler, Template } from "./register";
 
 export type HeadSearch = {
   box: PixelBox;
@@ -35,8 +36,12 @@ export type HeadEdge = {
   centroid: Vec2;
   pixels: number;
   contrast: number;
+  /** the head's own grey level */
+  headLevel: number;
   /** body extent across the travel direction, from the centroid (px) */
   body: [number, number];
+  /** the body's extent along the travel direction, from the centroid (px) */
+  reach: [number, number];
 };
 
 type MaskPixel = { x: number; y: number; d: number };
@@ -157,6 +162,7 @@ export function findHeadEdge(frame: GreyImage, background: GreyImage, search: He
   let sw = 0, sws = 0;
   const body: { s: number; c: number }[] = [];
   const frontByBin = new Map<number, number>();
+  let alongMin = Infinity, alongMax = -Infinity;
   for (const m of mask) {
     const s = across(m.x, m.y);
     const bin = Math.floor(s);
@@ -164,7 +170,10 @@ export function findHeadEdge(frame: GreyImage, background: GreyImage, search: He
     const c = Math.min(1, m.d / contrast);
     body.push({ s, c });
     sw += c; sws += c * s;
-    frontByBin.set(bin, Math.max(frontByBin.get(bin) ?? -Infinity, along(m.x, m.y)));
+    const a = along(m.x, m.y);
+    frontByBin.set(bin, Math.max(frontByBin.get(bin) ?? -Infinity, a));
+    alongMin = Math.min(alongMin, a);
+    alongMax = Math.max(alongMax, a);
   }
   const sMid = sws / sw;
   const sigmaC = search.noise / contrast;
@@ -172,14 +181,8 @@ export function findHeadEdge(frame: GreyImage, background: GreyImage, search: He
   // by a pixel's 1/√12 (uniform), the middle by half their root-sum-square.
   const sMidErr = Math.hypot((sigmaC * Math.sqrt(body.reduce((acc, b) => acc + (b.s - sMid) ** 2, 0))) / sw, Math.SQRT1_2 / Math.sqrt(12));
 
-  // Coverage per point against the background's own level there: frame = c·head + (1 − c)·turf, so
-  // c = (turf − frame) / (turf − head). The turf's grain then no longer moves the edge.
   const headLevel = median(mask.filter((m) => m.d >= 0.8 * contrast).map((m) => frame.data[Math.floor(m.y) * frame.width + Math.floor(m.x)]!));
-  const coverage = (x: number, y: number) => {
-    const turf = sampleBilinear(background, x, y);
-    const span = search.sign * (turf - headLevel);
-    return span > search.threshold ? (search.sign * (turf - sampleBilinear(frame, x, y))) / span : (search.sign * (turf - sampleBilinear(frame, x, y))) / contrast;
-  };
+  const coverage = coverageSampler(frame, background, search, headLevel, contrast);
   const trim = Math.max(1, Math.round((b1 - b0) * 0.12));
   const edgePoints: Vec2[] = [];
   for (let bin = b0 + trim; bin <= b1 - trim; bin++) {
@@ -240,7 +243,56 @@ export function findHeadEdge(frame: GreyImage, background: GreyImage, search: He
   // Floors: the sub-pixel edge interpolation's own bias on a sampled profile (0.05 px).
   const pointPrecisionPx = Math.hypot(lineStdErrAt(edge, tMid), sMidSpread, 0.05);
   const linePrecisionPx = Math.hypot(Math.max(lineStdErrAt(edge, tEnds[0]), lineStdErrAt(edge, tEnds[1])), 0.05);
-  return { edge, point, pointPrecisionPx, ends, linePrecisionPx, centroid, pixels: mask.length, contrast, body: [b0, b1 + 1] };
+  return {
+    edge, point, pointPrecisionPx, ends, linePrecisionPx, centroid, pixels: mask.length, contrast, headLevel, body: [b0, b1 + 1], reach: [alongMin, alongMax],
+  };
+}
+
+/**
+ * Coverage by the head at any position: frame = c·head + (1 − c)·turf, so c = (turf − frame) /
+ * (turf − head) against the background's own level there; the turf's grain then no longer moves
+ * an edge. Where turf and head are too alike to tell, the head's overall contrast stands in.
+ */
+export function coverageSampler(frame: GreyImage, background: GreyImage, search: Pick<HeadSearch, "sign" | "threshold">, headLevel: number, contrast: number): Sampler {
+  return (x, y) => {
+    const turf = sampleBilinear(background, x, y);
+    const span = search.sign * (turf - headLevel);
+    return (search.sign * (turf - sampleBilinear(frame, x, y))) / (span > search.threshold ? span : contrast);
+  };
+}
+
+/** Margin around the head's body for its registration patch, px. */
+const PATCH_MARGIN_PX = 3;
+
+/**
+ * The head's patch for registration (lib/tracking/register): pixel centres over its body and a
+ * margin, in the travel frame of `search`, with their coverage on this frame. The ball's disc is
+ * left out (its rim blends with the head's when they touch); across the travel direction the patch
+ * keeps to the body and a margin, so the shaft, which swings on its own, barely enters.
+ */
+export function headTemplate(frame: GreyImage, background: GreyImage, search: HeadSearch, head: HeadEdge): Template {
+  const d = search.towards;
+  const p: Vec2 = [-d[1], d[0]];
+  const [c0, c1] = head.centroid;
+  const coverage = coverageSampler(frame, background, search, head.headLevel, head.contrast);
+  const [a0, a1] = [head.reach[0] - PATCH_MARGIN_PX, head.reach[1] + PATCH_MARGIN_PX];
+  const [s0, s1] = [head.body[0] - PATCH_MARGIN_PX, head.body[1] + PATCH_MARGIN_PX];
+  const corners = [[a0, s0], [a0, s1], [a1, s0], [a1, s1]].map(([a, s]) => [c0 + d[0] * a! + p[0] * s!, c1 + d[1] * a! + p[1] * s!]);
+  const xs = corners.map((c) => c[0]!), ys = corners.map((c) => c[1]!);
+  const points: Vec2[] = [];
+  const values: number[] = [];
+  const ex = search.exclude;
+  for (let y = Math.max(1, Math.floor(Math.min(...ys))); y <= Math.min(frame.height - 2, Math.ceil(Math.max(...ys))); y++) {
+    for (let x = Math.max(1, Math.floor(Math.min(...xs))); x <= Math.min(frame.width - 2, Math.ceil(Math.max(...xs))); x++) {
+      const px = x + 0.5, py = y + 0.5;
+      const a = (px - c0) * d[0] + (py - c1) * d[1], s = (px - c0) * p[0] + (py - c1) * p[1];
+      if (a < a0 || a > a1 || s < s0 || s > s1) continue;
+      if (ex && Math.hypot(px - ex.x, py - ex.y) < ex.r + 1) continue;
+      points.push([px, py]);
+      values.push(coverage(px, py));
+    }
+  }
+  return { points, values };
 }
 
 export type ShaftLine = { ends: [Vec2, Vec2]; precisionPx: number; line: LineFit };

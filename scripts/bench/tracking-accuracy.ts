@@ -63,7 +63,7 @@ const VIEWS: ClipView[] = ["overhead", "face-on", "down-the-line"];
 type Plan = { index: number; mix: (typeof MIXES)[number]; options: AnyClipOptions };
 
 /** The same clips on every run of a seed. */
-function plan(count: number, seed: number): Plan[] {
+export function plan(count: number, seed: number): Plan[] {
   const rnd = random(seed);
   const between = (a: number, b: number) => Math.round((a + (b - a) * rnd()) * 100) / 100;
   return Array.from({ length: count }, (_, index) => {
@@ -269,7 +269,8 @@ async function main(): Promise<void> {
   report(results, (performance.now() - started) / 1000);
 }
 
-main().then(
+// Run as a script; imported (to reuse its clip plan), it does nothing.
+if (process.argv[1]?.endsWith("tracking-accuracy.ts")) main().then(
   () => process.exit(0),
   (e: unknown) => {
     console.error(e);

@@ -14,6 +14,7 @@ import type { Vec2 } from "@/lib/geometry/vector";
 import type { View } from "@/lib/marks/types";
 import { fitBall, type BallFit } from "@/lib/tracking/ball";
 import { changedCentroid, findHeadEdge, findShaftLine, headSign, type HeadSearch } from "@/lib/tracking/head";
+import { clubheadTrack, type HeadOnFrame } from "@/lib/tracking/head-track";
 import { boxAround, cropImage, median, medianOfCrops, robustStd, type GreyImage, type PixelBox } from "@/lib/tracking/image";
 import { findMarker } from "@/lib/tracking/marker";
 import { addressFromStillness, CONFIRM_FRAMES, impactFromBall, refineAddress, restJitter } from "@/lib/tracking/moments";
@@ -247,11 +248,15 @@ export class ClipTracker {
     if (!(norm > 0)) return void this.notes.push("The head's direction of travel could not be found.");
     const search: HeadSearch = { ...base, towards: [raw[0] / norm, raw[1] / norm], noise: this.noise };
 
+    const heads: HeadOnFrame[] = [];
     for (let f = earliestFrame; f <= k; f++) {
-      const head = findHeadEdge(this.image(this.fromRing(f)!), background, search);
-      if (!head) continue;
+      const image = this.image(this.fromRing(f)!);
+      const head = findHeadEdge(image, background, search);
+      if (head) heads.push({ frame: f, image, head });
+    }
+    for (const c of clubheadTrack(heads, background, search)) {
       this.clubheadFrames++;
-      this.proposals.push({ frame: f, kind: "point", role: "clubhead", points: [head.point], precisionPx: head.pointPrecisionPx });
+      this.proposals.push({ frame: c.frame, kind: "point", role: "clubhead", points: [c.point], precisionPx: c.precisionPx });
     }
     if (this.clubheadFrames < CLUBHEAD_FRAMES) this.notes.push(`Clubhead found on ${this.clubheadFrames} of the last ${CLUBHEAD_FRAMES} frames before impact.`);
 

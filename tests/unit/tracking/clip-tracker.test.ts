@@ -86,6 +86,16 @@ describe("overhead clip (fixture geometry, 480×270, 240 fps)", () => {
     }
   });
 
+  it("places the clubhead points relative to each other to 0.05 px across the path (the head registered frame to frame), while the face turns", () => {
+    // Path is the direction of the last 4 points, about 2 px apart: only their relative places count.
+    const heads = result.proposals.filter((p) => p.role === "clubhead");
+    const across = (p: Vec2) => p[0]; // the fixture's path here is straight up the picture (pathDeg 0)
+    const offsets = heads.map((p) => across(p.points[0]!) - across(truth.frames[p.frame]!.clubhead));
+    const mean = offsets.reduce((a, v) => a + v, 0) / offsets.length;
+    for (const o of offsets) expect(Math.abs(o - mean)).toBeLessThan(0.05);
+    for (const p of heads) expect(p.precisionPx).toBeLessThan(0.1);
+  });
+
   // A 47 px face here (0.35°); the 1280×720 clip's 126 px face is held to 0.3° in the integration test.
   it("proposes face lines on the address and impact frames within 0.35° of the truth", () => {
     const faces = result.proposals.filter((p) => p.role === "face");
