@@ -209,6 +209,13 @@ export const clips = pgTable("clips", {
   createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
   // SHA-256 of the file as sent (hex): one file is never uploaded twice into a fitting.
   contentSha256: text("content_sha256"),
+  // The store's multipart upload of a large file while it is under way: aborted when the clip is
+  // deleted before it arrived, so no orphaned parts stay behind. Cleared once the parts are put together.
+  multipartUploadId: text("multipart_upload_id"),
+  // A putt the fitter set aside (a mishit): kept and shown, left out of every statistic. Null counts.
+  // Set on every clip of its stroke together, since a putt is one stroke from up to three views.
+  mishitReason: text("mishit_reason"),
+  mishitAt: timestamp("mishit_at", { withTimezone: true }),
   ...timestamps,
 }, (t) => [
   index("clips_build_created_idx").on(t.buildId, t.createdAt),
@@ -217,6 +224,19 @@ export const clips = pgTable("clips", {
   index("clips_studio_state_updated_idx").on(t.studioId, t.state, t.updatedAt),
   uniqueIndex("clips_stroke_view_key").on(t.strokeId, t.view),
 ]);
+
+// A read-only studio-screen link for one fitting: only the SHA-256 of its token is kept. It works
+// until it expires, is revoked (a new link revokes the older ones) or the fitting is completed.
+export const studioScreenLinks = pgTable("studio_screen_links", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  studioId: uuid("studio_id").notNull().references(() => studios.id, { onDelete: "cascade" }),
+  fittingId: uuid("fitting_id").notNull().references(() => fittings.id, { onDelete: "cascade" }),
+  tokenHash: text("token_hash").notNull().unique(),
+  expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+  revokedAt: timestamp("revoked_at", { withTimezone: true }),
+  createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [index("studio_screen_links_fitting_idx").on(t.fittingId, t.createdAt)]);
 
 export type Point2 = [number, number];
 
