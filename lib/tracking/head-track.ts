@@ -97,6 +97,23 @@ export function clubheadTrack(heads: readonly HeadOnFrame[], background: GreyIma
   });
 }
 
+/**
+ * Whether the head's last points travel within `maxDeg` of the direction the ball left in. A
+ * putter's path and the ball's start differ by a few degrees (the face, not the path, sends the
+ * ball); a track far off that is the tracker following something else (a shadow's edge, a foot).
+ */
+export function trackFollowsLaunch(points: readonly ClubheadPoint[], launch: Vec2, maxDeg: number, lastN = 4): boolean {
+  const last = [...points].sort((a, b) => a.frame - b.frame).slice(-lastN);
+  const limit = Math.cos((maxDeg * Math.PI) / 180);
+  // Each step, not only the whole: one point off the track bends the fitted line as much.
+  for (let i = 1; i < last.length; i++) {
+    const d = sub(last[i]!.point, last[i - 1]!.point);
+    const cos = (d[0] * launch[0] + d[1] * launch[1]) / (Math.hypot(...d) * Math.hypot(...launch));
+    if (!(cos >= limit)) return false;
+  }
+  return true;
+}
+
 function keepPoints(template: Template, keep: (p: Vec2) => boolean): Template {
   const points: Vec2[] = [], values: number[] = [];
   template.points.forEach((p, i) => {

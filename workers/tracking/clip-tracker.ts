@@ -14,8 +14,9 @@ import type { Vec2 } from "@/lib/geometry/vector";
 import type { View } from "@/lib/marks/types";
 import { fitBall, type BallFit } from "@/lib/tracking/ball";
 import { changedCentroid, findHeadEdge, findShaftLine, headSign, type HeadSearch } from "@/lib/tracking/head";
-import { clubheadTrack, type HeadOnFrame } from "@/lib/tracking/head-track";
+import { clubheadTrack, trackFollowsLaunch, type HeadOnFrame } from "@/lib/tracking/head-track";
 import { boxAround, cropImage, median, medianOfCrops, robustStd, type GreyImage, type PixelBox } from "@/lib/tracking/image";
+import { relit } from "@/lib/tracking/light";
 import { findMarker } from "@/lib/tracking/marker";
 import { addressFromStillness, CONFIRM_FRAMES, impactFromBall, refineAddress, restJitter } from "@/lib/tracking/moments";
 import type { Proposal, TrackingResult } from "@/lib/tracking/types";
@@ -31,6 +32,10 @@ const RING = CLUBHEAD_FRAMES + CONFIRM_FRAMES + 3;
 const CONFIRM_RADII = 0.5;
 /** the region searched for the head, in ball radii around the ball */
 const HEAD_REACH_RADII = 8;
+/** a putt's path and start direction differ by a few degrees; a head track further off is not the head */
+const MAX_PATH_TO_LAUNCH_DEG = 20;
+/** cells of the light correction, in ball radii (a putter head is 1–4 radii deep) */
+const LIGHT_CELL_RADII = 3;
 /** sampling step of the change count (every other pixel and row is plenty for "did it move") */
 const CHANGE_STRIDE = 2;
 /** still frames kept for the address (it may turn out a few frames before the still run's end) */
@@ -233,11 +238,15 @@ export class ClipTracker {
     const background = this.backgroundFor(c, k);
     if (!background) return void this.notes.push("Too few frames between address and impact to see the turf without the head: no clubhead, face or shaft proposals.");
     const impactData = this.fromRing(k)!;
-    const sign = headSign(this.image(impactData), background, c.box, this.threshold);
+    // Each frame with its light matched to the background's first (a drifting shadow, flicker).
+    const cell = Math.max(24, Math.round(LIGHT_CELL_RADII * c.rest.r));
+    const lit = (data: Uint8Array) => relit(this.image(data), background, c.box, cell);
+    const impactImage = lit(impactData);
+    const sign = headSign(impactImage, background, c.box, this.threshold);
     const base = { box: c.box, sign, threshold: this.threshold, exclude: { x: c.rest.x, y: c.rest.y, r: c.rest.r } };
     const earliestFrame = Math.max(0, k - CLUBHEAD_FRAMES + 1);
-    const atImpact = changedCentroid(this.image(impactData), background, base);
-    const atStart = changedCentroid(this.image(this.fromRing(earliestFrame)!), background, base);
+    const atImpact = changedCentroid(impactImage, background, base);
+    const atStart = changedCentroid(lit(this.fromRing(earliestFrame)!), background, base);
     if (!atImpact) return void this.notes.push("The head was not found near the ball at impact.");
     // The head travels about where it sends the ball (start direction and path differ by a few
     // degrees); the ball's first frames after impact are in the ring. Otherwise: the head's own motion.
@@ -250,20 +259,25 @@ export class ClipTracker {
 
     const heads: HeadOnFrame[] = [];
     for (let f = earliestFrame; f <= k; f++) {
-      const image = this.image(this.fromRing(f)!);
+      const image = f === k ? impactImage : lit(this.fromRing(f)!);
       const head = findHeadEdge(image, background, search);
       if (head) heads.push({ frame: f, image, head });
     }
-    for (const c of clubheadTrack(heads, background, search)) {
-      this.clubheadFrames++;
-      this.proposals.push({ frame: c.frame, kind: "point", role: "clubhead", points: [c.point], precisionPx: c.precisionPx });
+    const track = clubheadTrack(heads, background, search);
+    if (launched && !trackFollowsLaunch(track, launched, MAX_PATH_TO_LAUNCH_DEG)) {
+      this.notes.push(`The head's track runs more than ${MAX_PATH_TO_LAUNCH_DEG}° off the ball's start (something else moved near the ball, a shadow perhaps): no clubhead proposals; mark the head by hand.`);
+    } else {
+      for (const c of track) {
+        this.clubheadFrames++;
+        this.proposals.push({ frame: c.frame, kind: "point", role: "clubhead", points: [c.point], precisionPx: c.precisionPx });
+      }
     }
-    if (this.clubheadFrames < CLUBHEAD_FRAMES) this.notes.push(`Clubhead found on ${this.clubheadFrames} of the last ${CLUBHEAD_FRAMES} frames before impact.`);
+    if (this.clubheadFrames > 0 && this.clubheadFrames < CLUBHEAD_FRAMES) this.notes.push(`Clubhead found on ${this.clubheadFrames} of the last ${CLUBHEAD_FRAMES} frames before impact.`);
 
-    const moments: { frame: number; data: Uint8Array }[] = [{ frame: k, data: impactData }];
-    if (c.address && c.address.frame !== k) moments.unshift({ frame: c.address.frame, data: c.address.image });
+    const moments: { frame: number; image: GreyImage }[] = [{ frame: k, image: impactImage }];
+    if (c.address && c.address.frame !== k) moments.unshift({ frame: c.address.frame, image: lit(c.address.image) });
     for (const m of moments) {
-      const head = findHeadEdge(this.image(m.data), background, search);
+      const head = findHeadEdge(m.image, background, search);
       if (!head) {
         this.notes.push(`The head's front was not found on frame ${m.frame}.`);
         continue;
@@ -271,7 +285,7 @@ export class ClipTracker {
       if (this.options.view === "overhead") {
         this.proposals.push({ frame: m.frame, kind: "line", role: "face", points: head.ends, precisionPx: head.linePrecisionPx });
       } else if (this.options.view === "face-on") {
-        const shaft = findShaftLine(this.image(m.data), background, search, head);
+        const shaft = findShaftLine(m.image, background, search, head);
         if (shaft) this.proposals.push({ frame: m.frame, kind: "line", role: "shaft", points: shaft.ends, precisionPx: shaft.precisionPx });
         else this.notes.push(`The shaft was not found on frame ${m.frame}.`);
       }
