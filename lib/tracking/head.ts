@@ -89,6 +89,12 @@ function bodyRun(across: number[]): [number, number] | null {
 }
 
 export const MIN_HEAD_PIXELS = 40;
+/**
+ * Edge points 1 px apart are read from bilinear samples 2 px wide (and from a picture the codec's
+ * deblocking has smoothed): neighbours share their noise, so a line fit has about half as many
+ * independent points as it has points, and its standard error is √2 times the textbook one.
+ */
+const EDGE_CORRELATION = Math.SQRT2;
 /** edge points this close to the excluded disc (the ball) are left out of the edge fit, px */
 const EDGE_CLEARANCE_PX = 4;
 
@@ -241,8 +247,8 @@ export function findHeadEdge(frame: GreyImage, background: GreyImage, search: He
   const tEnds = [tAt(b0 + trim), tAt(b1 - trim + 1)] as const;
   const ends: [Vec2, Vec2] = [pointOnLine(edge, tEnds[0]), pointOnLine(edge, tEnds[1])];
   // Floors: the sub-pixel edge interpolation's own bias on a sampled profile (0.05 px).
-  const pointPrecisionPx = Math.hypot(lineStdErrAt(edge, tMid), sMidSpread, 0.05);
-  const linePrecisionPx = Math.hypot(Math.max(lineStdErrAt(edge, tEnds[0]), lineStdErrAt(edge, tEnds[1])), 0.05);
+  const pointPrecisionPx = Math.hypot(EDGE_CORRELATION * lineStdErrAt(edge, tMid), sMidSpread, 0.05);
+  const linePrecisionPx = Math.hypot(EDGE_CORRELATION * Math.max(lineStdErrAt(edge, tEnds[0]), lineStdErrAt(edge, tEnds[1])), 0.05);
   return {
     edge, point, pointPrecisionPx, ends, linePrecisionPx, centroid, pixels: mask.length, contrast, headLevel, body: [b0, b1 + 1], reach: [alongMin, alongMax],
   };
@@ -332,7 +338,7 @@ export function findShaftLine(frame: GreyImage, background: GreyImage, search: H
   // The kept centres' extent along the line gives the two ends.
   const ts = centres.map(([x, y]) => (x - line.centre[0]) * line.direction[0] + (y - line.centre[1]) * line.direction[1]);
   const tMin = Math.min(...ts), tMax = Math.max(...ts);
-  const precisionPx = Math.hypot(Math.max(lineStdErrAt(line, tMin), lineStdErrAt(line, tMax)), 0.05);
+  const precisionPx = Math.hypot(EDGE_CORRELATION * Math.max(lineStdErrAt(line, tMin), lineStdErrAt(line, tMax)), 0.05);
   return { ends: [pointOnLine(line, tMin), pointOnLine(line, tMax)], precisionPx, line };
 }
 

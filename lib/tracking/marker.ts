@@ -2,11 +2,14 @@
  * The marker on the ball: a small spot darker than the ball (a coloured dot is darker in grey
  * too), inside 0.8 of the ball's radius. Its centre is the darkness-weighted centroid; the
  * precision follows from the pixel noise by error propagation of the weighted mean,
- * σx = σ·√Σ(x − x̄)² / Σw.
+ * σx = σ·√Σ(x − x̄)² / Σw, with a floor of 0.1 px: on a turning sphere the spot is foreshortened
+ * unevenly, and its darkness-weighted centroid strays from its centre by about that much.
  */
 import type { Vec2 } from "@/lib/geometry/vector";
 import type { BallFit } from "./ball";
 import type { GreyImage } from "./image";
+
+const MARKER_FLOOR_PX = 0.1;
 
 export type MarkerFit = { point: Vec2; precisionPx: number; pixels: number };
 
@@ -38,6 +41,6 @@ export function findMarker(image: GreyImage, ball: Pick<BallFit, "x" | "y" | "r"
   const mx = wx / w, my = wy / w;
   let sx = 0, sy = 0;
   for (const c of spot) { sx += (c.x - mx) ** 2; sy += (c.y - my) ** 2; }
-  const precisionPx = Math.hypot((noise * Math.sqrt(Math.max(sx, sy))) / w, 0.05);
+  const precisionPx = Math.hypot((noise * Math.sqrt(Math.max(sx, sy))) / w, MARKER_FLOOR_PX);
   return { point: [mx, my], precisionPx, pixels: corePixels };
 }
