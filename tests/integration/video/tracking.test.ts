@@ -17,7 +17,7 @@ import { makeWorld, tokenFor, type World } from "../../support/world";
 
 const options: ClipOptions = {
   width: 640, height: 360, fps: 240, frameCount: 240, impactFrame: 150,
-  faceAngleAddressDeg: 1.5, faceAngleImpactDeg: -0.8, ballSpeedPxPerFrame: 5, startDirectionDeg: -0.6,
+  faceAngleAddressDeg: 1.5, faceAngleImpactDeg: -0.8, ballSpeedPxPerFrame: 5, startDirectionDeg: -0.6, pathDeg: 1.2,
 };
 const truth = clipTruth(options);
 
@@ -118,6 +118,14 @@ describe("a generated overhead putt ends ready with the tracker's proposals", ()
     const mmPerS = 5 * 240 * (42.67 / (2 * truth.ballRadiusPx));
     const expected = speed.unit === "m/s" ? mmPerS / 1000 : speed.unit === "mm/s" ? mmPerS : NaN;
     expect(Math.abs(speed.value! / expected - 1)).toBeLessThan(0.01);
+    // Path from the tracked clubhead alone: the issue's goal is 0.5°; the last 4 points lie 2 px
+    // apart here, so 1.5° is held (known miss on small clips, docs/benchmarks.md), and the
+    // stated uncertainty must not be smaller than the error it makes.
+    const pathRow = measured.find((m) => m.key === "path");
+    if (!pathRow || pathRow.value === null) throw new Error(`no path: ${JSON.stringify(pathRow)}`);
+    expect(pathRow.method).toBe("mixed"); // tracked clubhead, hand-drawn target line
+    expect(Math.abs(pathRow.value - 1.2)).toBeLessThan(1.5);
+    expect(Math.abs(pathRow.value - 1.2)).toBeLessThan(3 * (pathRow.uncertainty ?? 0));
   });
 });
 
