@@ -93,13 +93,11 @@ const pgConstraint = (err: unknown) =>
 export async function presignClipParts(actor: SignedInActor, clipId: string, input: z.infer<typeof clipPartsSchema>) {
   const { clip } = await loadClip(actor, clipId, "golfer.write");
   if (clip.state !== "awaiting_upload") throw new ApiError("conflict", "This clip's file has already arrived");
-  let uploadId = input.uploadId;
-  if (!uploadId) {
-    uploadId = await startMultipartUpload(clip.objectKey, clip.contentType);
-    // Kept so that deleting the clip before its file arrives drops the stored parts too.
-    await db.update(clips).set({ multipartUploadId: uploadId }).where(eq(clips.id, clip.id));
-  }
-  const started = uploadId;
+  const started = input.uploadId ?? (await startMultipartUpload(clip.objectKey, clip.contentType));
+  // The upload's id is kept so that deleting the clip, or the sweep of abandoned uploads, drops the
+  // stored parts too; the time shows the upload is still moving.
+  await db.update(clips).set({ multipartUploadId: started, updatedAt: new Date() }).where(eq(clips.id, clip.id));
+  const uploadId = started;
   const parts = await Promise.all(input.partNumbers.map(async (partNumber) => ({
     partNumber, url: await presignUploadPart(clip.objectKey, started, partNumber),
   })));
