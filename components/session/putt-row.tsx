@@ -1,6 +1,7 @@
 "use client";
 
-// One putt in the session list: its state, its key numbers once ready, and the corrections —
+// One putt in the session list: its state, its key numbers once ready (the tracker's proposals count
+// once the fitter accepts them: that confirms the impact frame), and the corrections —
 // move to another build, set aside as a mishit (with the reason) or back, delete.
 import Link from "next/link";
 import { useState } from "react";
@@ -17,7 +18,8 @@ export function PuttRow({ fittingId, putt, number, builds, canEdit }: Props) {
   const [reason, setReason] = useState("");
   const patch = useSessionChange(fittingId, (body: Record<string, unknown>) => apiFetch(`/api/clips/${putt.clipId}`, { method: "PATCH", body }));
   const remove = useSessionChange(fittingId, () => apiFetch(`/api/clips/${putt.clipId}`, { method: "DELETE" }));
-  const failure = patch.error ?? remove.error;
+  const accept = useSessionChange(fittingId, () => apiFetch(`/api/clips/${putt.clipId}/proposals/accept`, { method: "POST", body: {} }));
+  const failure = patch.error ?? remove.error ?? accept.error;
   const measured = putt.numbers.filter((n) => n.value !== null);
   return (
     <li className={`rounded-card border border-chalk-300 p-2 ${putt.mishit ? "bg-chalk-200" : ""}`} data-putt={putt.clipId} data-putt-state={putt.state} data-mishit={putt.mishit !== null}>
@@ -28,7 +30,15 @@ export function PuttRow({ fittingId, putt, number, builds, canEdit }: Props) {
       {putt.mishit && <p className="text-label text-slate-700" data-testid="mishit-reason">Set aside: {putt.mishit.reason}</p>}
       {putt.state === "failed" && <p className="field-error">{putt.failureReason}</p>}
       {putt.state === "ready" && (
-        measured.length === 0 ? <p className="text-label text-slate-600">Ready: <Link className="underline" href={`/studio/clips/${putt.clipId}`}>mark it</Link> for numbers.</p> : (
+        measured.length === 0 ? (
+          <p className="flex flex-wrap items-center gap-2 text-label text-slate-600">
+            {putt.tracking === "pending" && <span>Tracking…</span>}
+            {putt.tracking === "proposed" && canEdit && (
+              <button type="button" className="btn-quiet min-h-0 py-1" onClick={() => accept.mutate(undefined)} disabled={accept.isPending}>Use the tracked marks</button>
+            )}
+            <span>or <Link className="underline" href={`/studio/clips/${putt.clipId}`}>review and mark it</Link> for numbers.</span>
+          </p>
+        ) : (
           <dl className="mt-1 grid grid-cols-2 gap-x-3 text-label">
             {measured.map((n) => (
               <div key={n.key} className="contents">

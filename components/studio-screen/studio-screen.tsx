@@ -1,7 +1,7 @@
 "use client";
 
 // The studio screen: chalk on ink, read from a few metres. The current putt's main numbers, one
-// per line, very large, with the side word under; the builds side by side as spread plots; the
+// per line, very large, with the side word under; beside them the builds as spread plots; the
 // build leading on consistency in the one accent. No controls; it follows the session by polling.
 import { useQuery } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/client/api";
@@ -33,19 +33,19 @@ export function StudioScreen({ fittingId, token, initial }: { fittingId: string;
   const shown = current?.numbers.filter((n) => n.value !== null).slice(0, 3) ?? [];
   const plotKey = plotKeyOf(data.builds);
   return (
-    <main className="flex min-h-screen flex-col gap-10 bg-ink p-10 text-chalk" data-testid="studio-screen">
+    <main className="grid min-h-screen grid-cols-1 gap-12 bg-ink p-10 text-chalk xl:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]" data-testid="studio-screen">
       <section aria-label="Current putt" className="flex flex-col gap-6">
         <p className="text-3xl text-slate-300" data-testid="current-putt">
           {current && currentBuild ? <>{currentBuild.label} · putt <span className="num">{puttNumber}</span>{current.mishit && " · set aside"}</> : "Waiting for the first putt"}
         </p>
         {current && shown.length === 0 && <p className="text-5xl text-slate-300">{current.state === "ready" ? "Measuring…" : "On its way…"}</p>}
-        <div className="flex flex-wrap gap-x-20 gap-y-8">
+        <div className="flex flex-col gap-8">
           {shown.map((n) => {
             const side = sideWords(n.value!, n.unit, n.signWords);
             return (
               <div key={n.key} data-number={n.key}>
                 <p className="text-2xl uppercase tracking-wide text-slate-300">{n.label}</p>
-                <p className="num text-[clamp(4rem,9vw,9rem)] font-semibold leading-none">
+                <p className="num text-[clamp(3.5rem,7vw,7.5rem)] font-semibold leading-none">
                   {valueText(n.value!, n.unit, n.signWords !== null)}
                   {n.uncertainty != null && <span className="text-[0.4em] font-light text-slate-300"> {uncertaintyText(n.uncertainty, n.unit)}</span>}
                 </p>
@@ -55,9 +55,9 @@ export function StudioScreen({ fittingId, token, initial }: { fittingId: string;
           })}
         </div>
       </section>
-      <section aria-label="Builds" className="mt-auto flex flex-col gap-4">
+      <section aria-label="Builds" className="flex flex-col gap-4">
         <p className="text-2xl text-slate-300">{plotKey.label}, putt by putt · band: the studio&apos;s window</p>
-        <ol className="grid gap-6" style={{ gridTemplateColumns: `repeat(${Math.max(1, Math.min(data.builds.length, 5))}, minmax(0, 1fr))` }}>
+        <ol className="grid gap-6" style={{ gridTemplateColumns: `repeat(${Math.max(1, Math.min(data.builds.length, 3))}, minmax(0, 1fr))` }}>
           {data.builds.map((b) => {
             const leading = data.leading?.buildId === b.id;
             const stat = b.summary.find((s) => s.key === plotKey.key);

@@ -3,7 +3,7 @@ import "server-only";
 // its build with its state and, once ready, its key numbers with their uncertainty, and each build's
 // running summary (the comparison's own per-build statistics, mishits left out). The fitting page
 // and the studio screen poll it; it reads only, so a poll costs a handful of indexed selects.
-import { asc, eq } from "drizzle-orm";
+import { asc, eq, sql } from "drizzle-orm";
 import { db, schema } from "@/db";
 import { compareBuilds } from "@/lib/compare/compare";
 import { metricDefinition } from "@/lib/compare/metric-labels";
@@ -17,6 +17,8 @@ import { settingsOfStudio } from "./settings";
 const { clips, golfers } = schema;
 
 type Fitting = Awaited<ReturnType<typeof getFitting>>;
+/** Where the tracker's proposals stand: numbers need an impact, which the fitter confirms by accepting them. */
+type TrackingStage = "off" | "pending" | "proposed" | "accepted";
 
 // GET /api/fittings/{id}/session
 export async function getSession(actor: SignedInActor, fittingId: string) {
@@ -30,6 +32,8 @@ export async function sessionOf(fitting: Fitting) {
       .select({
         id: clips.id, buildId: clips.buildId, strokeId: clips.strokeId, view: clips.view, state: clips.state, progress: clips.progress,
         failureReason: clips.failureReason, originalName: clips.originalName, createdAt: clips.createdAt, mishitReason: clips.mishitReason,
+        tracking: sql<TrackingStage>`case when not ${clips.trackingEnabled} then 'off' when ${clips.tracking} is null then 'pending'
+          when ${clips.tracking} ? 'acceptedAt' then 'accepted' else 'proposed' end`,
       })
       .from(clips)
       .where(eq(clips.fittingId, fitting.id))
@@ -49,7 +53,7 @@ export async function sessionOf(fitting: Fitting) {
   const putts = clipRows.map((c) => ({
     clipId: c.id, buildId: c.buildId, strokeId: c.strokeId, view: c.view, state: c.state, progress: c.progress,
     failureReason: c.failureReason, fileName: c.originalName, createdAt: c.createdAt,
-    mishit: c.mishitReason === null ? null : { reason: c.mishitReason },
+    mishit: c.mishitReason === null ? null : { reason: c.mishitReason }, tracking: c.tracking,
     numbers: SESSION_KEYS[c.view].map((key) => {
       const row = byClip.get(c.id)?.find((r) => r.key === key);
       const definition = metricDefinition(key);
