@@ -11,10 +11,19 @@ export function plotKeyOf(builds: SessionData["builds"]): PlotKey {
     : { key: "face_angle_impact", label: "Face angle at impact" };
 }
 
-export function SpreadPlot({ build, plotKey }: { build: SessionBuild; plotKey: PlotKey["key"] }) {
-  const values = build.plotted.map((p) => (plotKey === "start_direction" ? p.start : p.face)).filter((v): v is number => v !== null);
+const plottedValues = (build: SessionBuild, plotKey: PlotKey["key"]) =>
+  build.plotted.map((p) => (plotKey === "start_direction" ? p.start : p.face)).filter((v): v is number => v !== null);
+
+/** One half-width for every build's plot, so that their spreads compare side by side. */
+export function plotReach(builds: SessionData["builds"], plotKey: PlotKey["key"]): number {
+  const values = builds.flatMap((b) => plottedValues(b, plotKey));
+  const window = builds.flatMap((b) => b.summary).find((s) => s.key === plotKey)?.window ?? null;
+  return Math.max(2, ...values.map((v) => Math.abs(v) * 1.15), ...(window ? [Math.abs(window.min) * 1.5, Math.abs(window.max) * 1.5] : []));
+}
+
+export function SpreadPlot({ build, plotKey, reach }: { build: SessionBuild; plotKey: PlotKey["key"]; reach: number }) {
+  const values = plottedValues(build, plotKey);
   const window = build.summary.find((s) => s.key === plotKey)?.window ?? null;
-  const reach = Math.max(2, ...values.map((v) => Math.abs(v) * 1.15), ...(window ? [Math.abs(window.min) * 1.5, Math.abs(window.max) * 1.5] : []));
   const x = (v: number) => 50 + (v / reach) * 48;
   return (
     <svg viewBox="0 0 100 24" className="h-20 w-full" role="img" aria-label={`${values.length} putts`}>

@@ -8,7 +8,7 @@ import { apiFetch } from "@/lib/client/api";
 import type { SessionData } from "@/components/session/types";
 import { SESSION_POLL_MS } from "@/lib/config/session";
 import { sideWords, uncertaintyText, valueText } from "@/lib/review/readout";
-import { SpreadPlot, plotKeyOf } from "./spread-plot";
+import { SpreadPlot, plotKeyOf, plotReach } from "./spread-plot";
 
 type ScreenData = SessionData & { expiresAt: string };
 
@@ -32,6 +32,7 @@ export function StudioScreen({ fittingId, token, initial }: { fittingId: string;
   const puttNumber = current && currentBuild ? currentBuild.putts.findIndex((p) => p.clipId === current.clipId) + 1 : 0;
   const shown = current?.numbers.filter((n) => n.value !== null).slice(0, 3) ?? [];
   const plotKey = plotKeyOf(data.builds);
+  const reach = plotReach(data.builds, plotKey.key);
   return (
     <main className="grid min-h-screen grid-cols-1 gap-12 bg-ink p-10 text-chalk xl:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]" data-testid="studio-screen">
       <section aria-label="Current putt" className="flex flex-col gap-6">
@@ -69,7 +70,7 @@ export function StudioScreen({ fittingId, token, initial }: { fittingId: string;
                   <span className="num" data-testid="screen-n">{stat?.summary.n ?? 0}</span> putts
                   {stat?.spread != null && <> · spread <span className="num">{valueText(stat.spread, stat.unit, false)}</span></>}
                 </p>
-                <SpreadPlot build={b} plotKey={plotKey.key} />
+                <SpreadPlot build={b} plotKey={plotKey.key} reach={reach} />
                 {leading && <p className="text-2xl font-semibold text-signal">Leading on consistency</p>}
               </li>
             );

@@ -34,6 +34,14 @@ export default async function FittingPage({ params }: { params: Promise<{ id: st
         <a className="btn-quiet" href={`/api/fittings/${fitting.id}/csv`} download>Measurements (CSV)</a>
       </header>
 
+      <section aria-labelledby="session-heading" className="flex flex-col gap-4">
+        <div className="flex flex-wrap items-end justify-between gap-3">
+          <h2 id="session-heading" className="text-title">Session</h2>
+          {staff && <StudioScreenLink fittingId={fitting.id} />}
+        </div>
+        <SessionPanel fittingId={fitting.id} canEdit={staff} />
+      </section>
+
       <section aria-labelledby="builds-heading" className="flex flex-col gap-4">
         <h2 id="builds-heading" className="text-title">Builds</h2>
         <BuildsBoard builds={builds} canEdit={staff} />
@@ -43,14 +51,6 @@ export default async function FittingPage({ params }: { params: Promise<{ id: st
             <BuildForm fittingId={fitting.id} first={builds.length === 0} />
           </div>
         )}
-      </section>
-
-      <section aria-labelledby="session-heading" className="flex flex-col gap-4">
-        <div className="flex flex-wrap items-end justify-between gap-3">
-          <h2 id="session-heading" className="text-title">Session</h2>
-          {staff && <StudioScreenLink fittingId={fitting.id} />}
-        </div>
-        <SessionPanel fittingId={fitting.id} canEdit={staff} />
       </section>
 
       <section aria-labelledby="clips-heading" className="flex flex-col gap-4">
