@@ -7,9 +7,11 @@ import { CLIP_TRACK_QUEUE, clipTrackPayload, clipTrackPolicy } from "@/lib/jobs/
 import { runClipJob } from "./clip-job";
 import { runTrackJob } from "./clip-track-job";
 import { sendAllDueReminders } from "@/lib/server/dal/bookings";
+import { sweepAbandonedUploads } from "@/lib/server/dal/upload-sweep";
 import { startCommentMail } from "./comment-mail";
 
 const REMINDER_QUEUE = "booking-reminders";
+const UPLOAD_SWEEP_QUEUE = "upload-sweep";
 
 /** Running jobs' controllers: aborted on shutdown or expiry, which kills their ffmpeg. */
 export const running = new Set<AbortController>();
@@ -59,5 +61,12 @@ export async function registerJobs(boss: PgBoss, concurrency: number): Promise<v
   await boss.work(REMINDER_QUEUE, async () => {
     const { sent } = await sendAllDueReminders();
     if (sent > 0) console.log(JSON.stringify({ event: "booking_reminders", sent }));
+  });
+  // Abandoned uploads: hourly, one worker deletes clips whose file never arrived within a day.
+  await boss.createQueue(UPLOAD_SWEEP_QUEUE, { name: UPLOAD_SWEEP_QUEUE });
+  await boss.schedule(UPLOAD_SWEEP_QUEUE, "17 * * * *");
+  await boss.work(UPLOAD_SWEEP_QUEUE, async () => {
+    const swept = await sweepAbandonedUploads();
+    if (swept.clips > 0) console.log(JSON.stringify({ event: "upload_sweep", ...swept }));
   });
 }

@@ -24,7 +24,7 @@ export function FittingClips({ data, clipHref }: { data: PhoneFitting; clipHref:
                     <Link href={clipHref(c.id)} className="block overflow-hidden rounded-card border border-chalk-300 bg-ink" aria-label={`${viewWords[c.view]} clip ${i + 1}`}>
                       {/* eslint-disable-next-line @next/next/no-img-element -- a presigned redirect, not a static asset */}
                       <img src={`/api/clips/${c.id}/media/poster`} alt="" className="aspect-video w-full object-cover" loading="lazy" />
-                      <span className="block bg-white px-2 py-2 text-label">{viewWords[c.view]} {i + 1}</span>
+                      <span className="block bg-white px-2 py-2 text-label">{viewWords[c.view]} {i + 1}{c.mishitReason !== null && <span className="text-slate-600"> · set aside: {c.mishitReason}</span>}</span>
                     </Link>
                   ) : (
                     <span className="block rounded-card border border-chalk-300 px-2 py-3 text-label text-slate-600">{viewWords[c.view]} · {stateWords[c.state]}</span>

@@ -2,7 +2,7 @@ import "server-only";
 // The object store, reached only through the AWS SDK: s3rver locally, S3 or any
 // S3-compatible store in production. Browsers get short-lived presigned URLs, never keys.
 import {
-  CompleteMultipartUploadCommand, CreateMultipartUploadCommand, DeleteObjectsCommand, GetObjectCommand, HeadObjectCommand,
+  AbortMultipartUploadCommand, CompleteMultipartUploadCommand, CreateMultipartUploadCommand, DeleteObjectsCommand, GetObjectCommand, HeadObjectCommand,
   ListObjectsV2Command, PutObjectCommand, S3Client, UploadPartCommand,
 } from "@aws-sdk/client-s3";
 import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
@@ -59,6 +59,23 @@ export async function finishMultipartUpload(key: string, uploadId: string, parts
     Bucket: bucket(), Key: key, UploadId: uploadId,
     MultipartUpload: { Parts: [...parts].sort((a, b) => a.partNumber - b.partNumber).map((p) => ({ PartNumber: p.partNumber, ETag: p.etag })) },
   }));
+}
+
+/**
+ * Drops a multipart upload's stored parts. A store that does not know the upload (already finished
+ * or aborted) or does not implement aborting (the local fake answers 405) is left to the bucket's
+ * lifecycle rule; the answer says which happened.
+ */
+export async function abortMultipartUpload(key: string, uploadId: string): Promise<"aborted" | "not-there" | "unsupported"> {
+  try {
+    await s3().send(new AbortMultipartUploadCommand({ Bucket: bucket(), Key: key, UploadId: uploadId }));
+    return "aborted";
+  } catch (err) {
+    const status = (err as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
+    if (status === 404) return "not-there";
+    if (status === 405 || status === 501) return "unsupported";
+    throw err;
+  }
 }
 
 export async function presignDownload(key: string, expiresInS = 5 * 60) {

@@ -93,9 +93,13 @@ const pgConstraint = (err: unknown) =>
 export async function presignClipParts(actor: SignedInActor, clipId: string, input: z.infer<typeof clipPartsSchema>) {
   const { clip } = await loadClip(actor, clipId, "golfer.write");
   if (clip.state !== "awaiting_upload") throw new ApiError("conflict", "This clip's file has already arrived");
-  const uploadId = input.uploadId ?? (await startMultipartUpload(clip.objectKey, clip.contentType));
+  const started = input.uploadId ?? (await startMultipartUpload(clip.objectKey, clip.contentType));
+  // The upload's id is kept so that deleting the clip, or the sweep of abandoned uploads, drops the
+  // stored parts too; the time shows the upload is still moving.
+  await db.update(clips).set({ multipartUploadId: started, updatedAt: new Date() }).where(eq(clips.id, clip.id));
+  const uploadId = started;
   const parts = await Promise.all(input.partNumbers.map(async (partNumber) => ({
-    partNumber, url: await presignUploadPart(clip.objectKey, uploadId, partNumber),
+    partNumber, url: await presignUploadPart(clip.objectKey, started, partNumber),
   })));
   return { uploadId, parts };
 }
@@ -125,7 +129,7 @@ export async function completeClipUpload(actor: SignedInActor, clipId: string, m
   }
   const [queued] = await db
     .update(clips)
-    .set({ state: "queued", progress: 0, updatedAt: new Date() })
+    .set({ state: "queued", progress: 0, multipartUploadId: null, updatedAt: new Date() })
     .where(and(eq(clips.id, clip.id), eq(clips.state, "awaiting_upload")))
     .returning();
   if (!queued) return { clip: (await loadClip(actor, clipId)).clip, queued: false };

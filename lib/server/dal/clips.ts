@@ -2,6 +2,7 @@ import "server-only";
 import { eq, sql } from "drizzle-orm";
 import { z } from "zod";
 import { db, schema } from "@/db";
+import type { ClipPatch } from "@/lib/schemas/clip-edit";
 import type { SignedInActor } from "../access";
 import { ApiError, notFound } from "../http/errors";
 import { loadClip, type LoadedClip } from "./clip-access";
@@ -9,17 +10,6 @@ import { queueTracking } from "../queue";
 import { refreshMeasurements } from "./measurements";
 
 const { clips } = schema;
-
-export const clipSettingsSchema = z
-  .object({
-    captureFps: z.number().positive().max(100_000, "captureFps must be at most 100000 frames per second"),
-    mirrored: z.boolean(),
-    slowMotionFactor: z.number().positive().max(1000),
-    // Off: the tracker's proposals are left out of the measurements and not made again.
-    trackingEnabled: z.boolean(),
-  })
-  .partial()
-  .strict();
 
 const momentFrame = z.number().int().nonnegative().nullable();
 export const momentsSchema = z.object({ address: momentFrame, takeaway: momentFrame, top: momentFrame, impact: momentFrame, finish: momentFrame }).partial().strict();
@@ -38,7 +28,8 @@ function presentClip({ clip, golferId, handedness }: Pick<LoadedClip, "clip" | "
     slowMotionFactor: clip.slowMotionFactor, mirrored: clip.mirrored, durationS: clip.durationS,
     motionSignal: clip.motionSignal, suggestedImpactFrame: clip.suggestedImpactFrame, moments: momentsOf(clip),
     trackingEnabled: clip.trackingEnabled, tracking: clip.tracking,
-    handedness, golferId, fittingId: clip.fittingId, buildId: clip.buildId,
+    handedness, golferId, fittingId: clip.fittingId, buildId: clip.buildId, strokeId: clip.strokeId,
+    mishit: clip.mishitReason === null ? null : { reason: clip.mishitReason, at: clip.mishitAt },
   };
 }
 
@@ -65,8 +56,8 @@ async function changeClip(actor: SignedInActor, loaded: LoadedClip, change: (cli
   return { clip: presentClip({ ...loaded, clip }), measurements: await refreshMeasurements(clip.id, actor.userId) };
 }
 
-// PATCH /api/clips/{id}: capture fps, mirroring, playback slow-motion factor (staff only)
-export async function updateClipSettings(actor: SignedInActor, clipId: string, input: z.infer<typeof clipSettingsSchema>) {
+// Capture fps, mirroring, playback slow-motion factor, tracking (staff only): part of PATCH /api/clips/{id}
+export async function updateClipSettings(actor: SignedInActor, clipId: string, input: Omit<ClipPatch, "buildId" | "mishit">) {
   const loaded = await loadClip(actor, clipId, "golfer.write");
   return changeClip(actor, loaded, () => input);
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, inArray, isNull } from "drizzle-orm";
 import { db, schema } from "@/db";
 import { measurementsCsv } from "@/lib/compare/csv";
 import { ERASE_WORD } from "@/lib/schemas/golfer";
@@ -12,14 +12,14 @@ import { currentMeasurementRows } from "./measurements";
 
 const { builds, clips, fittings, marks, comments, specs, golfers, users, coachGolfers } = schema;
 
-/** A fitting's measurements as CSV: one row per clip per measurement. */
+/** A fitting's measurements as CSV: one row per clip per measurement; putts set aside as mishits are left out. */
 export async function fittingMeasurementsCsv(actor: SignedInActor, fittingId: string) {
   const fitting = await getFitting(actor, fittingId);
   const clipRows = await db
     .select({ buildPosition: builds.position, buildLabel: builds.label, clipId: clips.id, view: clips.view, clipCreatedAt: clips.createdAt })
     .from(clips)
     .innerJoin(builds, eq(builds.id, clips.buildId))
-    .where(and(eq(clips.fittingId, fittingId), eq(clips.studioId, fitting.studioId)))
+    .where(and(eq(clips.fittingId, fittingId), eq(clips.studioId, fitting.studioId), isNull(clips.mishitReason)))
     .orderBy(asc(builds.position), asc(clips.createdAt), asc(clips.id));
   const byClip = new Map<string, Awaited<ReturnType<typeof currentMeasurementRows>>>();
   for (const m of await currentMeasurementRows(clipRows.map((c) => c.clipId))) byClip.set(m.clipId, [...(byClip.get(m.clipId) ?? []), m]);

@@ -20,7 +20,7 @@ export async function getPhoneFitting(actor: SignedInActor, fittingId: string) {
   const fitting = await getFitting(actor, fittingId);
   const buildRows = fitting.builds;
   const clipRows = buildRows.length === 0 ? [] : await db
-    .select({ id: clips.id, buildId: clips.buildId, view: clips.view, state: clips.state, failureReason: clips.failureReason, createdAt: clips.createdAt, impactFrame: clips.impactFrame })
+    .select({ id: clips.id, buildId: clips.buildId, view: clips.view, state: clips.state, failureReason: clips.failureReason, createdAt: clips.createdAt, impactFrame: clips.impactFrame, mishitReason: clips.mishitReason })
     .from(clips)
     .where(and(inArray(clips.buildId, buildRows.map((b) => b.id)), eq(clips.studioId, fitting.studioId)))
     .orderBy(asc(clips.createdAt));
@@ -66,7 +66,8 @@ export type PhoneClip = Awaited<ReturnType<typeof getPhoneClip>>;
  */
 export async function getComparePair(actor: SignedInActor, fittingId: string, pick: { a?: string; b?: string; view?: string }) {
   const { builds: list, chosenBuildId } = await getPhoneFitting(actor, fittingId);
-  const ready = list.flatMap((b) => b.clips.filter((c) => c.state === "ready" && c.impactFrame !== null).map((c) => ({ ...c, build: b })));
+  // A putt set aside as a mishit is never offered as a build's example.
+  const ready = list.flatMap((b) => b.clips.filter((c) => c.state === "ready" && c.impactFrame !== null && c.mishitReason === null).map((c) => ({ ...c, build: b })));
   const baseline = list.find((b) => b.isBaseline) ?? list[0];
   const chosen = list.find((b) => b.id === chosenBuildId) ?? list.filter((b) => b.id !== baseline?.id).at(-1);
   const latestOf = (buildId: string | undefined, view?: string) => ready.filter((c) => c.build.id === buildId && (!view || c.view === view)).at(-1);

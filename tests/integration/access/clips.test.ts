@@ -1,5 +1,5 @@
 // Access matrix for the clip pipeline's routes: registering uploads, completing them, the
-// live list, and the frame and media links.
+// live list, the frame and media links, and the session's corrections (move, mishit, delete).
 import { db, schema } from "@/db";
 import { all, golferOf, readGolfer, runMatrix, writeGolfer, type MatrixCase, type Target } from "../../support/matrix";
 import type { World } from "../../support/world";
@@ -42,6 +42,11 @@ const cases: MatrixCase<W>[] = [
   { route: "GET /api/clips/{id}/frames/{n}", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/frames/3` }), expect: redirectTo(302) },
   { route: "GET /api/clips/{id}/media/poster", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/media/poster` }), expect: redirectTo(302) },
   { route: "GET /api/clips/{id}/media/proxy", request: (w, t) => ({ method: "GET", path: `${clipPath(w, t)}/media/proxy` }), expect: redirectTo(302) },
+  { route: "PATCH /api/clips/{id} (mishit)", request: (w, t) => ({ method: "PATCH", path: clipPath(w, t), body: { mishit: { reason: "off the toe" } } }), expect: writeGolfer(200) },
+  // Its own build again: allowed callers change nothing and get 200.
+  { route: "PATCH /api/clips/{id} (buildId)", request: (w, t) => ({ method: "PATCH", path: clipPath(w, t), body: { buildId: golferOf(w, t).build.id } }), expect: writeGolfer(200) },
+  // A fresh clip for every caller: an allowed delete removes it.
+  { route: "DELETE /api/clips/{id}", request: async (w, t) => ({ method: "DELETE", path: `/api/clips/${(await insertClip(golferOf(w, t))).id}` }), expect: writeGolfer(200) },
   { route: "GET /api/builds/{id}/strokes", request: (w, t) => ({ method: "GET", path: `/api/builds/${golferOf(w, t).build.id}/strokes` }), expect: readGolfer },
   { route: "POST /api/builds/{id}/strokes", request: (w, t) => ({ method: "POST", path: `/api/builds/${golferOf(w, t).build.id}/strokes` }), expect: writeGolfer(201) },
   { route: "GET /api/strokes/{id}", request: (w, t) => ({ method: "GET", path: `/api/strokes/${w.strokes[t]}` }), expect: readGolfer },

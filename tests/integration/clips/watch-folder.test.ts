@@ -1,7 +1,6 @@
 // The capture computer's watch folder: `npm run upload -- --watch DIR --fitting ID` against the
 // running stack. Files go into the build recording when they appear, with the view from their
 // camera sub-folder, only once they have stopped growing, and never twice (content hash).
-import { spawn, type ChildProcess } from "node:child_process";
 import { createHash } from "node:crypto";
 import { copyFile, mkdir, mkdtemp, open, readFile, stat, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
@@ -11,45 +10,14 @@ import { eq } from "drizzle-orm";
 import { afterEach, expect, it } from "vitest";
 import { db, schema } from "@/db";
 import { generateClip } from "../../fixtures/generate-clips";
+import { startDropProxy } from "../../support/drop-proxy";
 import { BASE, call } from "../../support/http";
+import { sentLine, startWatcher, stopWatchers } from "../../support/watcher";
 import { makeWorld, tokenFor } from "../../support/world";
 
+afterEach(stopWatchers);
+
 const small = { width: 320, height: 180, fps: 240, frameCount: 60, impactFrame: 35, ballSpeedPxPerFrame: 2 } as const;
-
-type Watcher = { child: ChildProcess; lines: string[] };
-const running: Watcher[] = [];
-afterEach(() => running.forEach((w) => w.child.kill("SIGKILL")));
-
-async function startWatcher(dir: string, fittingId: string, token: string, extra: string[] = []): Promise<Watcher> {
-  // One node process (tsx as a loader), so that a kill reaches the watcher itself.
-  const child = spawn(process.execPath, ["--import", "tsx", "scripts/upload.ts", "--watch", dir, "--fitting", fittingId, "--consent", "--settle-ms", "800", ...extra], {
-    env: { ...process.env, FITFRAME_TOKEN: token, FITFRAME_URL: BASE },
-    stdio: ["ignore", "pipe", "pipe"],
-  });
-  const watcher = { child, lines: [] as string[] };
-  running.push(watcher);
-  let buffered = "";
-  child.stdout!.on("data", (chunk: Buffer) => {
-    buffered += chunk.toString();
-    const parts = buffered.split("\n");
-    buffered = parts.pop()!;
-    watcher.lines.push(...parts);
-  });
-  child.stderr!.on("data", (chunk: Buffer) => process.stderr.write(chunk));
-  await lineMatching(watcher, (l) => l.startsWith("watching "));
-  return watcher;
-}
-
-async function lineMatching(w: Watcher, test: (line: string) => boolean, timeoutMs = 20_000): Promise<string> {
-  const until = Date.now() + timeoutMs;
-  for (;;) {
-    const line = w.lines.find(test);
-    if (line) return line;
-    if (Date.now() > until) throw new Error(`no matching line; the watcher printed:\n${w.lines.join("\n")}`);
-    await sleep(100);
-  }
-}
-const sentLine = (w: Watcher, relative: string) => lineMatching(w, (l) => l.startsWith(`${relative}\t`) && /\t(sent|already there)/.test(l));
 
 /** The fitting's clips once none is still on its way (ready or failed), or as they are at the deadline. */
 async function settledClips<T extends { state: string }>(auth: { token: string }, fittingId: string, timeoutMs = 30_000): Promise<T[]> {
@@ -216,4 +184,34 @@ it("sends a large file in parts and, after a restart, only the parts the store d
   expect(clip).toMatchObject({ state: "ready", frameCount: 60 });
   const [stored] = await db.select().from(schema.clips).where(eq(schema.clips.id, clipId));
   expect(stored!.sizeBytes).toBe(bytes.length);
+});
+
+it("resumes a part whose connection dropped half-way: every part reaches the store once", { timeout: 90_000 }, async () => {
+  const w = await makeWorld();
+  const token = await tokenFor(w.fitter.id);
+  const auth = { token: token.value };
+  const dir = await mkdtemp(path.join(tmpdir(), "fitframe-watch-"));
+  await mkdir(path.join(dir, "overhead"));
+  const staged = path.join(await mkdtemp(path.join(tmpdir(), "fitframe-watch-src-")), "drop.mp4");
+  await generateClip(staged, { ...small, faceAngleAddressDeg: 1, faceAngleImpactDeg: 0.5, startDirectionDeg: 0, seed: 6 });
+  const size = (await stat(staged)).size;
+  const partBytes = Math.ceil(size / 4);
+  expect((await call(auth, "PUT", `/api/fittings/${w.own.fitting.id}/recording`, { buildId: w.own.build.id })).status).toBe(200);
+
+  // Between the watcher and the store, the first upload of part 2 is cut off after half its bytes.
+  const proxy = await startDropProxy(BASE, process.env.S3_PUBLIC_ENDPOINT!, [2]);
+  try {
+    const watcher = await startWatcher(dir, w.own.fitting.id, token.value, ["--part-mib", String(partBytes / 1024 / 1024)], proxy.apiUrl);
+    await copyFile(staged, path.join(dir, "overhead", "drop.mp4"));
+    // The retry goes on into the clip the file was registered as.
+    expect(await sentLine(watcher, path.join("overhead", "drop.mp4"))).toMatch(/\tsent \(finished an upload that had broken off\)$/);
+    expect(proxy.dropped).toEqual([2]);
+    expect(watcher.lines.filter((l) => l.includes("\tpart ")).length).toBe(4);
+    // Each of the four parts was taken by the store exactly once; the dropped try never reached it.
+    expect([...proxy.storedParts.entries()].sort(([a], [b]) => a - b)).toEqual([[1, 1], [2, 1], [3, 1], [4, 1]]);
+  } finally {
+    await proxy.close();
+  }
+  const [clip] = await settledClips<{ state: string; frameCount: number | null }>(auth, w.own.fitting.id);
+  expect(clip).toMatchObject({ state: "ready", frameCount: 60 });
 });

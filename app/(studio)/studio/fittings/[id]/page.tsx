@@ -6,6 +6,8 @@ import { ComparisonPanel } from "@/components/compare/comparison-panel";
 import { FittingFee } from "@/components/booking/fitting-fee";
 import { BuildForm } from "@/components/fittings/build-form";
 import { BuildsBoard } from "@/components/fittings/builds-board";
+import { SessionPanel } from "@/components/session/session-panel";
+import { StudioScreenLink } from "@/components/session/studio-screen-link";
 import { IssueSpecForm } from "@/components/specs/issue-spec-form";
 import { requirePageActor } from "@/lib/server/page-actor";
 import { bookingOfFitting } from "@/lib/server/dal/bookings";
@@ -31,6 +33,14 @@ export default async function FittingPage({ params }: { params: Promise<{ id: st
         </div>
         <a className="btn-quiet" href={`/api/fittings/${fitting.id}/csv`} download>Measurements (CSV)</a>
       </header>
+
+      <section aria-labelledby="session-heading" className="flex flex-col gap-4">
+        <div className="flex flex-wrap items-end justify-between gap-3">
+          <h2 id="session-heading" className="text-title">Session</h2>
+          {staff && <StudioScreenLink fittingId={fitting.id} />}
+        </div>
+        <SessionPanel fittingId={fitting.id} canEdit={staff} />
+      </section>
 
       <section aria-labelledby="builds-heading" className="flex flex-col gap-4">
         <h2 id="builds-heading" className="text-title">Builds</h2>
