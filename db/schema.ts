@@ -26,6 +26,8 @@ const timestamps = {
 
 export type StudioSettings = {
   units: "ft" | "m";
+  /** How speeds are shown (values stay m/s); absent means m/s. */
+  speedUnit?: "m/s" | "ft/s" | "mph";
   frictionMu: number;
   windows: Record<string, { min: number; max: number }>;
   cameraFps: Record<"overhead" | "face-on" | "down-the-line", number>;

@@ -1,6 +1,6 @@
 import type { Comparison } from "@/lib/compare/compare";
 
-export type ComparisonReply = Comparison & { windows: Record<string, { min: number; max: number }>; units: "ft" | "m" };
+export type ComparisonReply = Comparison & { windows: Record<string, { min: number; max: number }>; units: "ft" | "m"; speedUnit?: "m/s" | "ft/s" | "mph"; handedness?: "right" | "left" };
 
 // Series styles: colour and marker shape together, so colour is never the only cue.
 export const SERIES = [

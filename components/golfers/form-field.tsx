@@ -2,7 +2,7 @@
 // A labelled input whose error text is tied to it (aria-describedby, aria-invalid).
 import type { InputHTMLAttributes, ReactNode } from "react";
 
-type Props = InputHTMLAttributes<HTMLInputElement> & { id: string; label: string; error?: string; hint?: ReactNode };
+type Props = InputHTMLAttributes<HTMLInputElement> & { id: string; label: ReactNode; error?: string; hint?: ReactNode };
 
 export function FormField({ id, label, error, hint, className, ...input }: Props) {
   const described = [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ") || undefined;

@@ -1,4 +1,4 @@
-import { isProposal, type ReviewMark } from "@/lib/review/marks";
+import { angleDegrees, isProposal, type ReviewMark } from "@/lib/review/marks";
 import { ROLE_LOOK } from "./roles-look";
 
 /** The marks on this frame as buttons, so a mark can be selected (then deleted) from the keyboard. */
@@ -22,6 +22,7 @@ export function FrameMarks({ marks, acceptedAt, selectedId, onSelect }: Props) {
                   <span aria-hidden className="inline-block h-2.5 w-2.5 rounded-full" style={{ background: ROLE_LOOK[m.role].colour }} />
                 )}
                 {ROLE_LOOK[m.role].label} {m.kind}
+                {m.kind === "angle" && angleDegrees(m.points) !== null && <span className="num" data-testid="angle-value">{angleDegrees(m.points)!.toFixed(1)}°</span>}
                 {isProposal(m, acceptedAt) && <span className="text-slate-400">(proposed)</span>}
               </button>
             </li>

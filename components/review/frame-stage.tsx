@@ -9,6 +9,7 @@ import { isProposal, moveHandle, type ReviewMark } from "@/lib/review/marks";
 import { planeSideLabels, type SideLabel, type Tool, type ToolOptions } from "@/lib/review/tools";
 import { insideImage, panBy, pinch, screenToImage, zoomAbout, type Size, type Viewport } from "@/lib/review/viewport";
 import type { FrameStore } from "./frame-store";
+import { Loupe } from "./loupe";
 import { MarkShape } from "./mark-shape";
 import { ROLE_LOOK } from "./roles-look";
 
@@ -107,12 +108,16 @@ export default function FrameStage(props: Props) {
     }
     if (before) pointers.current.set(e.evt.pointerId, p);
     if (pan.current) return onViewport(panBy(pan.current.vp, p[0] - pan.current.from[0], p[1] - pan.current.from[1]));
-    if (props.placed.length > 0) setHover(screenToImage(vp, p));
+    if (tool !== "select" && !panKey) setHover(screenToImage(vp, p));
   };
 
   const onPointerUp = (e: Konva.KonvaEventObject<PointerEvent>) => {
     pointers.current.delete(e.evt.pointerId);
     pan.current = null;
+  };
+  const onPointerLeave = (e: Konva.KonvaEventObject<PointerEvent>) => {
+    onPointerUp(e);
+    setHover(null);
   };
 
   const onWheel = (e: Konva.KonvaEventObject<WheelEvent>) => {
@@ -131,6 +136,8 @@ export default function FrameStage(props: Props) {
   const unit = 1 / vp.scale;
   const shown = (m: ReviewMark) => (drag && drag.id === m.id ? { ...m, points: moveHandle(m.points, drag.index, drag.to) } : m);
   const preview = props.placed.length > 0 ? [...props.placed, ...(hover ? [hover] : [])] : [];
+  // The loupe shows frame pixels four times larger than on screen (at least 3 screen px each).
+  const loupe = tool !== "select" && !panKey && hover && insideImage(hover, image) ? hover : null;
   const cursor = panKey || tool === "select" ? "grab" : "crosshair";
   const selectedPlane = props.marks.find((m) => m.id === props.selectedId && m.kind === "plane");
   const sideLabels: SideLabel[] =
@@ -141,6 +148,7 @@ export default function FrameStage(props: Props) {
         : [];
 
   return (
+    <>
     <Stage
       width={stage.width}
       height={stage.height}
@@ -153,7 +161,7 @@ export default function FrameStage(props: Props) {
       onPointerMove={onPointerMove}
       onPointerUp={onPointerUp}
       onPointerCancel={onPointerUp}
-      onPointerLeave={onPointerUp}
+      onPointerLeave={onPointerLeave}
       onWheel={onWheel}
     >
       <Layer listening={false}>
@@ -178,5 +186,9 @@ export default function FrameStage(props: Props) {
         ))}
       </Layer>
     </Stage>
+    {loupe && <Loupe bitmap={store.get(frame)} at={loupe} zoom={Math.max(vp.scale * 4, 3)} pointerOnLeft={imageToScreenX(vp, loupe[0]) < stage.width / 2} />}
+    </>
   );
 }
+
+const imageToScreenX = (vp: Viewport, x: number) => x * vp.scale + vp.x;

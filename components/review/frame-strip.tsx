@@ -10,13 +10,15 @@ type Props = {
   signal: number[] | null;
   moments: ReviewMoments;
   suggestedImpact: number | null;
+  /** Comment threads, drawn as small flags along the top; a click on one jumps to its frame. */
+  comments?: { id: string; frame: number; resolved: boolean }[];
   onSeek: (frame: number) => void;
 };
 
 const HEIGHT = 40;
 
 /** The motion signal along the clip with pins for the moments; click or drag to seek. */
-export function FrameStrip({ frameCount, frame, signal, moments, suggestedImpact, onSeek }: Props) {
+export function FrameStrip({ frameCount, frame, signal, moments, suggestedImpact, comments = [], onSeek }: Props) {
   const ref = useRef<HTMLDivElement>(null);
   const seekAt = (clientX: number) => {
     const box = ref.current?.getBoundingClientRect();
@@ -48,6 +50,13 @@ export function FrameStrip({ frameCount, frame, signal, moments, suggestedImpact
         <Pin at={frameToPercent(suggestedImpact, frameCount)} text="suggested impact" dashed />
       )}
       {pins.map(([name, n]) => <Pin key={name} at={frameToPercent(n, frameCount)} text={name} />)}
+      {comments.map((c) => (
+        <button key={c.id} type="button" data-testid="comment-marker" aria-label={`Comment at frame ${c.frame}`}
+          className={`absolute -top-1.5 h-3 w-3 -translate-x-1/2 rotate-45 border border-ink ${c.resolved ? "bg-slate-400" : "bg-signal"}`}
+          style={{ left: `${frameToPercent(c.frame, frameCount)}%` }}
+          onPointerDown={(e) => e.stopPropagation()}
+          onClick={() => onSeek(c.frame)} />
+      ))}
       <div className="pointer-events-none absolute inset-y-0 w-0.5 bg-signal" style={{ left: `${frameToPercent(frame, frameCount)}%` }} />
     </div>
   );

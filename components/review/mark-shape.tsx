@@ -3,7 +3,7 @@
 import type Konva from "konva";
 import { Circle, Group, Line, Text } from "react-konva";
 import type { Vec2 } from "@/lib/geometry/vector";
-import type { ReviewMark } from "@/lib/review/marks";
+import { angleDegrees, type ReviewMark } from "@/lib/review/marks";
 import { ROLE_LOOK } from "./roles-look";
 
 type Props = {
@@ -46,6 +46,18 @@ export function MarkShape({ mark, unit, selected, ghost, proposal, editable, onS
           lineJoin="round"
           dash={proposal ? [7 * unit, 5 * unit] : undefined}
           onPointerDown={select}
+        />
+      )}
+      {mark.kind === "angle" && mark.points[1] && angleDegrees(mark.points) !== null && (
+        <Text
+          x={mark.points[1][0] + 12 * unit}
+          y={mark.points[1][1] + 10 * unit}
+          text={`${angleDegrees(mark.points)!.toFixed(1)}°`}
+          fontSize={13 * unit}
+          fontStyle="bold"
+          fill={look.colour}
+          listening={false}
+          name="angle-value"
         />
       )}
       {mark.points.map((p, i) => (

@@ -2,6 +2,7 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/client/api";
+import { inStudioUnits, shownUnit } from "@/lib/format/units";
 import { METRICS_BY_VIEW, signWordsFor } from "@/lib/metrics/keys";
 import { methodWord, sideWords, uncertaintyText, valueText, type Window } from "@/lib/review/readout";
 import { Gauge } from "./gauge";
@@ -23,9 +24,13 @@ export function Readouts({ clip }: { clip: ReviewClip }) {
       {error && <p className="text-label text-signal-light">Could not load the measurements: {error.message}</p>}
       <dl className="flex flex-col gap-3">
         {METRICS_BY_VIEW[clip.view].map((def) => {
-          const m = byKey.get(def.key);
+          const raw = byKey.get(def.key);
+          const prefs = clip.unitPrefs ?? { units: "m" as const };
+          const m = raw && raw.value !== null ? { ...raw, ...inStudioUnits(raw.value, raw.uncertainty, raw.unit, prefs) } : raw;
+          const factor = raw ? shownUnit(raw.unit, prefs).factor : 1;
           const words = signWordsFor(clip.view, def.key, clip.handedness);
-          const window: Window | undefined = m?.window ?? data?.windows?.[def.key] ?? clip.windows[def.key];
+          const siWindow: Window | undefined = raw?.window ?? data?.windows?.[def.key] ?? clip.windows[def.key];
+          const window: Window | undefined = siWindow && { min: siWindow.min * factor, max: siWindow.max * factor };
           const uncertainty = m?.uncertainty ?? null;
           const method = methodWord(m?.method);
           return (

@@ -15,7 +15,7 @@ export const CONFLICT_MESSAGE = "This clip was changed in another window — rel
 type Saved = { mark: ReviewMark; measurements: MeasurementsReply["measurements"] };
 type Deleted = { deleted: string; measurements: MeasurementsReply["measurements"] };
 
-export type Notice = { tone: "conflict" | "error"; text: string } | null;
+export type Notice = { tone: "conflict" | "error" | "info"; text: string } | null;
 
 /**
  * The clip's marks, saved as they change: every edit goes to the API in order (one queue),
@@ -29,6 +29,7 @@ export function useMarks(clipId: string) {
   const [history, setHistoryState] = useState<History>(emptyHistory);
   const [pending, setPending] = useState(0);
   const [notice, setNotice] = useState<Notice>(null);
+  const [loaded, setLoaded] = useState(false);
   const marksRef = useRef<ReviewMark[]>([]);
   const historyRef = useRef<History>(emptyHistory());
   const queue = useRef<Promise<void>>(Promise.resolve());
@@ -50,7 +51,11 @@ export function useMarks(clipId: string) {
   useEffect(() => {
     let live = true;
     apiFetch<{ marks: ReviewMark[] }>(base)
-      .then((data) => live && setMarks(data.marks))
+      .then((data) => {
+        if (!live) return;
+        setMarks(data.marks);
+        setLoaded(true);
+      })
       .catch((err: Error) => live && setNotice({ tone: "error", text: `Could not load the marks: ${err.message}` }));
     return () => {
       live = false;
@@ -142,11 +147,14 @@ export function useMarks(clipId: string) {
 
   return {
     marks,
+    /** True once the clip's marks have come from the server. */
+    loaded,
     history,
     saving: pending > 0,
     notice,
     dismissNotice: () => setNotice(null),
     report: (text: string) => setNotice({ tone: "error", text }),
+    inform: (text: string) => setNotice({ tone: "info", text }),
     /** After a change made elsewhere (tracking accepted or run again): the server's marks, queued behind pending saves. */
     reload: () => enqueue(reload),
     /**

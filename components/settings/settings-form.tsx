@@ -17,7 +17,7 @@ export function SettingsForm({ initial, metrics }: { initial: StudioSettingsInpu
   const [windowErrors, setWindowErrors] = useState<Record<string, string>>({});
   const rows = Object.fromEntries(metrics.map((m) => [m.key, { min: initial.windows[m.key]?.min?.toString() ?? "", max: initial.windows[m.key]?.max?.toString() ?? "" }]));
   const { register, handleSubmit, setError, formState } = useForm<FormValues>({
-    defaultValues: { units: initial.units, frictionMu: initial.frictionMu, cameraFps: initial.cameraFps, windowRows: rows },
+    defaultValues: { units: initial.units, speedUnit: initial.speedUnit ?? "m/s", frictionMu: initial.frictionMu, cameraFps: initial.cameraFps, windowRows: rows },
   });
   const onSubmit = handleSubmit(async ({ windowRows, ...rest }) => {
     setStatus(null);
@@ -51,7 +51,11 @@ export function SettingsForm({ initial, metrics }: { initial: StudioSettingsInpu
           <label htmlFor="units" className="field-label">Distances in</label>
           <select id="units" className="field" {...register("units")}><option value="ft">feet</option><option value="m">metres</option></select>
         </div>
-        <FormField id="frictionMu" label="Sliding friction μ (ball on green)" type="number" step={0.01} hint="No agreed published value: set what suits your surface." error={formState.errors.frictionMu?.message} {...register("frictionMu", num)} />
+        <div>
+          <label htmlFor="speedUnit" className="field-label">Speeds in</label>
+          <select id="speedUnit" className="field" {...register("speedUnit")}><option value="m/s">m/s</option><option value="ft/s">ft/s</option><option value="mph">mph</option></select>
+        </div>
+        <FormField id="frictionMu" label={<>Sliding friction <span className="normal-case">μ</span> (ball on green)</>} type="number" step={0.01} hint="No agreed published value: set what suits your surface." error={formState.errors.frictionMu?.message} {...register("frictionMu", num)} />
       </fieldset>
       <fieldset className="grid gap-4 sm:grid-cols-3">
         <legend className="mb-2 text-title">Camera capture rate (frames per second)</legend>

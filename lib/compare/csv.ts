@@ -1,4 +1,9 @@
 // CSV (RFC 4180: comma-separated, CRLF line ends, fields with a comma, quote or line break in quotes).
+// Numbers are rounded to the precision the screens show (lib/metrics/display.ts), with a plain
+// hyphen-minus so spreadsheets read them. Two layouts: long (one row per clip per measurement) and
+// wide (one row per putt, a value and an uncertainty column per measurement).
+import { decimalsOf } from "@/lib/metrics/display";
+import { metricOrder } from "./metric-labels";
 
 export type MeasurementCsvRow = {
   fittingId: string;
@@ -23,16 +28,50 @@ export function csvText(value: string): string {
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
-const csvNumber = (value: number | null) => (value === null || !Number.isFinite(value) ? "" : String(value));
+/** A value at the shown precision; never "-0.0". */
+export function csvNumber(value: number | null, unit: string): string {
+  if (value === null || !Number.isFinite(value)) return "";
+  const text = value.toFixed(decimalsOf(unit));
+  return Number(text) === 0 ? text.replace("-", "") : text;
+}
 
-/** One row per clip per measurement; an empty value (or uncertainty) where it could not be computed. */
+/** An uncertainty at the value's precision; one that rounds to nothing is written as one unit of the last digit (never a claimed exact 0). */
+export function csvUncertainty(u: number | null | undefined, unit: string): string {
+  if (u == null || !Number.isFinite(u) || u < 0) return "";
+  const d = decimalsOf(unit);
+  return Number(u.toFixed(d)) > 0 ? u.toFixed(d) : (10 ** -d).toFixed(d);
+}
+
+/** Long layout: one row per clip per measurement; an empty value (or uncertainty) where it could not be computed. */
 export function measurementsCsv(rows: readonly MeasurementCsvRow[]): string {
   const lines = [MEASUREMENT_CSV_HEADER.join(",")];
   for (const r of rows) {
     lines.push(
       [
         r.fittingId, String(r.buildPosition), csvText(r.buildLabel), r.clipId, r.view, r.clipCreatedAt.toISOString(),
-        csvText(r.key), csvNumber(r.value), csvNumber(r.uncertainty ?? null), csvText(r.unit), r.method,
+        csvText(r.key), csvNumber(r.value, r.unit), csvUncertainty(r.uncertainty, r.unit), csvText(r.unit), r.method,
+      ].join(","),
+    );
+  }
+  return lines.join("\r\n") + "\r\n";
+}
+
+const unitSlug = (unit: string) => unit.replace(/[^a-z0-9]+/gi, "_").replace(/_$/, "");
+
+/** Wide layout: one row per clip (putt), then `<key>_<unit>` and `<key>_<unit>_se` for every measurement present. */
+export function measurementsCsvWide(rows: readonly MeasurementCsvRow[]): string {
+  const keys = [...new Map(rows.map((r) => [r.key, r.unit])).entries()].sort(([a], [b]) => metricOrder(a) - metricOrder(b) || a.localeCompare(b));
+  const header = ["fitting_id", "build_position", "build_label", "clip_id", "view", "clip_recorded_at", ...keys.flatMap(([k, u]) => [`${k}_${unitSlug(u)}`, `${k}_${unitSlug(u)}_se`])];
+  const clips = new Map<string, MeasurementCsvRow[]>();
+  for (const r of rows) clips.set(r.clipId, [...(clips.get(r.clipId) ?? []), r]);
+  const lines = [header.join(",")];
+  for (const own of clips.values()) {
+    const first = own[0]!;
+    const byKey = new Map(own.map((r) => [r.key, r]));
+    lines.push(
+      [
+        first.fittingId, String(first.buildPosition), csvText(first.buildLabel), first.clipId, first.view, first.clipCreatedAt.toISOString(),
+        ...keys.flatMap(([k, u]) => [csvNumber(byKey.get(k)?.value ?? null, u), csvUncertainty(byKey.get(k)?.uncertainty, u)]),
       ].join(","),
     );
   }

@@ -1,6 +1,9 @@
 import { holingWindowDeg, makeProbability } from "@/lib/physics/holing";
 import { METRES_PER_FOOT } from "@/lib/physics/units";
 import type { Summary } from "@/lib/stats/summary";
+import { MIN_PUTTS_FOR_MAKE } from "@/lib/stats/wilson";
+
+export { MIN_PUTTS_FOR_MAKE };
 
 export const MAKE_DISTANCES_FT = [3, 6, 10, 20] as const;
 
@@ -8,12 +11,14 @@ export type MakeChance = { distanceFt: number; windowDeg: number; probability: n
 
 /**
  * Make probability at each distance from a build's start direction, taken as Normal(mean, sd)
- * (derived: the holing window atan(r/D) of lib/physics/holing). Null below two putts or with no spread.
+ * (derived: the holing window atan(r/D) of lib/physics/holing). Null with no spread, and below
+ * MIN_PUTTS_FOR_MAKE putts: a share read off fewer putts cannot tell mostly holed from mostly
+ * missed (Wilson score interval, lib/stats/wilson.ts), so no percentage is given for it.
  */
 export function makeChances(startDirection: Summary | null, distancesFt: readonly number[] = MAKE_DISTANCES_FT): MakeChance[] {
   return distancesFt.map((distanceFt) => {
     const distanceM = distanceFt * METRES_PER_FOOT;
-    const usable = startDirection && startDirection.sd !== null && startDirection.sd > 0;
+    const usable = startDirection && startDirection.n >= MIN_PUTTS_FOR_MAKE && startDirection.sd !== null && startDirection.sd > 0;
     return {
       distanceFt,
       windowDeg: holingWindowDeg(distanceM),

@@ -41,8 +41,10 @@ export function specLines(spec: SpecData) {
       title: "Build shop",
       rows: [
         ["Head", text(s.head)], ["Neck", text(s.neck)], ["Length", num(s.lengthIn, " in")], ["Lie", num(s.lieDeg, "°", 1)],
-        ["Loft", num(s.loftDeg, "°", 1)], ...ruleRows(spec.build), ["Grip", text(s.grip)], ["Grip orientation", text(s.gripOrientation)],
-        ["Head mass", num(s.headMassG, " g", 1)], ["Swing weight", text(s.swingWeight)], ["Finish notes", text(s.finishNotes)],
+        ["Loft", num(s.loftDeg, "°", 1)], ["Offset", num(spec.build.offsetIn, " in")], ["Toe hang", text(spec.build.toeHang)],
+        ...ruleRows(spec.build), ["Grip", text(s.grip)], ["Grip mass", num(spec.build.gripMassG, " g", 1)], ["Grip orientation", text(s.gripOrientation)],
+        ["Head mass", num(s.headMassG, " g", 1)], ["Shaft mass", num(spec.build.shaftMassG, " g", 1)], ["Balance point", num(spec.build.balancePointIn, " in from the grip end")],
+        ["Swing weight", text(s.swingWeight)], ["Alignment aid", text(spec.build.alignmentAid)], ["Finish notes", text(s.finishNotes)],
       ],
     },
   ];

@@ -14,6 +14,8 @@ export type KeyCommand =
   | { type: "cancel" }
   | { type: "tool"; tool: Tool }
   | { type: "acceptProposals" }
+  | { type: "putt"; by: -1 | 1 }
+  | { type: "togglePlay" }
   | { type: "help" };
 
 export type KeyPress = { key: string; shiftKey: boolean; ctrlKey: boolean; metaKey: boolean; altKey: boolean };
@@ -43,6 +45,9 @@ export function commandForKey(e: KeyPress): KeyCommand | null {
     case "Delete": case "Backspace": return { type: "delete" };
     case "Escape": return { type: "cancel" };
     case "t": return { type: "acceptProposals" };
+    case "[": case "PageUp": return { type: "putt", by: -1 };
+    case "]": case "PageDown": return { type: "putt", by: 1 };
+    case "p": return { type: "togglePlay" };
     case "?": return { type: "help" };
   }
   const tool = TOOL_KEYS[key];
@@ -54,6 +59,8 @@ export const KEY_HELP: readonly { keys: string; does: string }[] = [
   { keys: "→ / ←", does: "Next / previous frame" },
   { keys: "Shift + → / ←", does: "Ten frames forward / back" },
   { keys: "Home / End", does: "First / last frame" },
+  { keys: "Space (tap) or P", does: "Play / pause the range (address → finish unless changed)" },
+  { keys: "[ / ] (Page Up / Down)", does: "Previous / next putt of this view, across builds" },
   { keys: "A / I", does: "Jump to address / impact" },
   { keys: "Shift + A / Shift + I", does: "Set address / impact to this frame" },
   { keys: "+ / − / 0", does: "Zoom in / out / fit the frame" },

@@ -63,3 +63,12 @@ export const isProposal = (m: Pick<ReviewMark, "source">, acceptedAt: string | n
 /** The mark as shown while its moved points are saved: moving a proposal makes it the fitter's own. */
 export const movedByHand = (m: ReviewMark, fields: Partial<MarkFields>): ReviewMark =>
   fields.points && m.source === "tracked" ? { ...m, ...fields, source: "hand", precisionPx: null } : { ...m, ...fields };
+
+/** The opening of an angle mark (arm, vertex, arm) in degrees, 0–180. */
+export function angleDegrees(points: readonly Vec2[]): number | null {
+  const [a, v, b] = points;
+  if (!a || !v || !b) return null;
+  const u: Vec2 = [a[0] - v[0], a[1] - v[1]], w: Vec2 = [b[0] - v[0], b[1] - v[1]];
+  if ((u[0] === 0 && u[1] === 0) || (w[0] === 0 && w[1] === 0)) return null;
+  return (Math.abs(Math.atan2(u[0] * w[1] - u[1] * w[0], u[0] * w[0] + u[1] * w[1])) * 180) / Math.PI;
+}

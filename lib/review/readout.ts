@@ -1,7 +1,8 @@
 // What a readout says: the value with an explicit sign and the side in words, its precision
 // (± one standard error), and where it sits against the studio's window (`in window`, `near`,
 // `outside`, or `undecided` when the number is too imprecise to tell; never a grade).
-import { formatMeasurement } from "@/lib/metrics/display";
+import { signed } from "@/lib/format/signed";
+import { decimalsOf, formatMeasurement } from "@/lib/metrics/display";
 import type { MetricDefinition } from "@/lib/metrics/keys";
 
 export type Window = { min: number; max: number };
@@ -9,15 +10,11 @@ export type WindowStanding = "in window" | "near" | "outside" | "undecided";
 export type MeasurementMethod = "marked" | "tracked" | "mixed";
 
 const UNIT_TEXT: Record<string, string> = { deg: "°", "deg/s": "°/s", "m/s": " m/s", rpm: " rpm", ratio: "", m: " m", mm: " mm" };
-const MINUS = "\u2212";
-
 export const unitText = (unit: string) => UNIT_TEXT[unit] ?? ` ${unit}`;
 
 /** "+1.4°" / "−2.9°" for signed numbers (sign always shown, a true minus), "1.85 m/s" for the rest. */
-export function valueText(value: number, unit: string, signed: boolean): string {
-  const text = formatMeasurement(value, unit);
-  const sign = signed && Number(text) > 0 ? "+" : "";
-  return `${sign}${text.replace(/^-/, MINUS)}${unitText(unit)}`;
+export function valueText(value: number, unit: string, withSign: boolean): string {
+  return `${signed(value, decimalsOf(unit), { plus: withSign })}${unitText(unit)}`;
 }
 
 /**
@@ -36,11 +33,12 @@ export function uncertaintyText(uncertainty: number | null | undefined, unit: st
  * A window as a range, never with ±: "−1° to +1°", "1.5 to 2.2 m/s". Ends keep only the decimals
  * they need (at most the unit's); signed measurements show an explicit plus.
  */
-export function windowText(w: Window, unit: string, signed: boolean): string {
+export function windowText(w: Window, unit: string, withSign: boolean): string {
+  // Ends keep only the decimals they need: "−1°", "+0.5°".
   const end = (v: number) => {
-    const trimmed = String(Number(formatMeasurement(v, unit)));
-    const text = trimmed === "-0" ? "0" : trimmed;
-    return `${signed && Number(text) > 0 ? "+" : ""}${text.replace(/^-/, MINUS)}`;
+    const n = Number(formatMeasurement(v, unit));
+    const decimals = (String(Math.abs(n)).split(".")[1] ?? "").length;
+    return signed(n, decimals, { plus: withSign });
   };
   const u = unitText(unit);
   // A symbol that hugs its number (°) goes on both ends; a spaced unit once, at the end.

@@ -9,6 +9,7 @@ export const windowSchema = z
 
 export const studioSettingsSchema = z.object({
   units: z.enum(["ft", "m"]),
+  speedUnit: z.enum(["m/s", "ft/s", "mph"]).optional(),
   frictionMu: z.number({ error: "Enter μ as a number" }).gt(0, "μ must be above 0").max(1, "μ is at most 1"),
   windows: z.record(z.string().regex(/^[a-z_]+$/, "A measurement key"), windowSchema),
   cameraFps: z.object({ overhead: fps, "face-on": fps, "down-the-line": fps }),

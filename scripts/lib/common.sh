@@ -15,6 +15,7 @@ ensure_debian_packages() {
   command -v chromium >/dev/null || missing+=(chromium)
   [ -x "$PGBIN/initdb" ] || missing+=(postgresql)
   command -v runuser >/dev/null || missing+=(util-linux)
+  command -v pdftotext >/dev/null || missing+=(poppler-utils)
   if [ ${#missing[@]} -gt 0 ]; then
     log "installing Debian packages: ${missing[*]}"
     apt-get update -qq

@@ -97,6 +97,11 @@ describe("clip review", () => {
     });
     expect(await page.getByTestId("frame-number").textContent()).toBe("0");
     await page.keyboard.press("Shift+A");
+    // With address set and no impact yet the screen goes to the suggested impact (frame 20); back to 0 to draw.
+    await expect.poll(() => page.getByTestId("frame-number").textContent()).toBe("20");
+    await page.getByRole("button", { name: "Dismiss" }).click();
+    await page.keyboard.press("Home");
+    await page.locator('[data-painted-frame="0"]').waitFor();
     await page.keyboard.press("2");
     await page.getByLabel("Role").selectOption("target");
     await clickImage(page, [320, 340]);

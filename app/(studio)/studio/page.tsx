@@ -27,7 +27,7 @@ export default async function StudioHome() {
       <h1 className="text-title lg:col-span-3">{staff ? "Today in the studio" : "Golfers shared with you"}</h1>
       {staff && <TodayList items={today} />}
       {staff && <ClipsToMark items={toMark} />}
-      {actor.role === "coach" && <UnreadSummary actor={actor} />}
+      {actor.role !== "golfer" && <UnreadSummary actor={actor} />}
       {actor.role === "coach" && <CoachFittings actor={actor} />}
       <GolferList golfers={golfers.golfers} total={golfers.total} />
     </div>

@@ -56,6 +56,8 @@ export async function createClipUpload(actor: SignedInActor, input: z.infer<type
       }
       throw err;
     });
+  // The first clip starts the fitting: planned → in progress (a later status set by hand stays).
+  if (inserted !== null) await db.update(fittings).set({ status: "in_progress", updatedAt: new Date() }).where(and(eq(fittings.id, fitting.id), eq(fittings.status, "planned")));
   if (inserted === null) {
     // The same file was registered by a concurrent call a moment ago: answer with that clip.
     return duplicateAnswer((await clipWithContent(fitting.id, input.contentSha256!))!);

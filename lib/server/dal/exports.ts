@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, inArray, isNull } from "drizzle-orm";
 import { db, schema } from "@/db";
-import { measurementsCsv } from "@/lib/compare/csv";
+import { measurementsCsv, measurementsCsvWide } from "@/lib/compare/csv";
 import { ERASE_WORD } from "@/lib/schemas/golfer";
 import { assertGolfer, type SignedInActor } from "../access";
 import { ApiError } from "../http/errors";
@@ -12,8 +12,8 @@ import { currentMeasurementRows } from "./measurements";
 
 const { builds, clips, fittings, marks, comments, specs, golfers, users, coachGolfers } = schema;
 
-/** A fitting's measurements as CSV: one row per clip per measurement; putts set aside as mishits are left out. */
-export async function fittingMeasurementsCsv(actor: SignedInActor, fittingId: string) {
+/** A fitting's measurements as CSV: one row per clip per measurement (or per putt, wide); putts set aside as mishits are left out. */
+export async function fittingMeasurementsCsv(actor: SignedInActor, fittingId: string, layout: "long" | "wide" = "long") {
   const fitting = await getFitting(actor, fittingId);
   const clipRows = await db
     .select({ buildPosition: builds.position, buildLabel: builds.label, clipId: clips.id, view: clips.view, clipCreatedAt: clips.createdAt })
@@ -28,7 +28,8 @@ export async function fittingMeasurementsCsv(actor: SignedInActor, fittingId: st
       .sort((a, b) => a.key.localeCompare(b.key))
       .map((m) => ({ ...c, key: m.key, value: m.value, uncertainty: m.uncertainty, unit: m.unit, method: m.method })),
   );
-  return measurementsCsv(rows.map((r) => ({ ...r, fittingId })));
+  const full = rows.map((r) => ({ ...r, fittingId }));
+  return layout === "wide" ? measurementsCsvWide(full) : measurementsCsv(full);
 }
 
 const LINK_SECONDS = 15 * 60;

@@ -59,6 +59,8 @@ export async function issueSpec(actor: SignedInActor, fittingId: string, input: 
   });
   const spec = await db.transaction(async (tx) => {
     await tx.update(specs).set({ supersededAt: issuedAt }).where(and(eq(specs.golferId, golfer!.id), isNull(specs.supersededAt)));
+    // Issuing the spec completes the fitting ("spec issued" on screen).
+    await tx.update(schema.fittings).set({ status: "completed", updatedAt: issuedAt }).where(eq(schema.fittings.id, fitting.id));
     const [row] = await tx
       .insert(specs)
       .values({ studioId: fitting.studioId, golferId: golfer!.id, fittingId, buildId: build.id, issuedBy: actor.userId, issuedAt, data })

@@ -11,6 +11,8 @@ let w: World;
 let fitter: { cookie: string };
 // x such that ±x has sample sd 1.0145° (n = 2: sd = x·√2)
 const x = 1.0145 / Math.SQRT2;
+// Five start directions ±s, ±s, 0: Σd² = 4s², sd = √(4s²/4) = s = 1.0145°.
+const s = 1.0145;
 
 beforeAll(async () => {
   w = await makeWorld();
@@ -24,6 +26,8 @@ beforeAll(async () => {
     { face_angle_impact: 1.5, path: 2 },
   ]);
   await addMeasuredClips(w, mallet, [0.2, -0.2, 0.4, -0.4, 0].map((v) => ({ face_angle_impact: v, start_direction: v / 2, path: 0.5 })));
+  const handWorked = await addBuild(w, "Hand-worked", {}, 3);
+  await addMeasuredClips(w, handWorked, [s, -s, s, -s, 0].map((v) => ({ start_direction: v })));
   // a clip not yet processed does not count
   const [pending] = await addMeasuredClips(w, mallet, [{ face_angle_impact: 9 }]);
   await db.update(schema.clips).set({ state: "processing" }).where(eq(schema.clips.id, pending!.id));
@@ -47,9 +51,15 @@ describe("GET /api/fittings/{id}/comparison", () => {
     expect(mallet.clipCount).toBe(5);
   });
 
+  it("no make probability below 5 putts (Wilson 1927 score interval: fewer cannot tell mostly holed from mostly missed)", async () => {
+    const res = await call(fitter, "GET", `/api/fittings/${w.own.fitting.id}/comparison`);
+    const make = res.body.builds[0].make as { probability: number | null }[];
+    expect(make.map((m) => m.probability)).toEqual([null, null, null, null]);
+  });
+
   it("make probability: μ = 0, σ = 1.0145° at 10 ft → 0.6827 (docs/references.md, hand-worked)", async () => {
     const res = await call(fitter, "GET", `/api/fittings/${w.own.fitting.id}/comparison`);
-    const make = res.body.builds[0].make as { distanceFt: number; probability: number; windowDeg: number }[];
+    const make = res.body.builds[2].make as { distanceFt: number; probability: number; windowDeg: number }[];
     expect(make.map((m) => m.distanceFt)).toEqual([3, 6, 10, 20]);
     const ten = make.find((m) => m.distanceFt === 10)!;
     expect(ten.windowDeg).toBeCloseTo(1.0145, 4);

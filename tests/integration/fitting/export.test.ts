@@ -27,7 +27,7 @@ beforeAll(async () => {
 });
 
 describe("GET /api/fittings/{id}/csv", () => {
-  it("one row per clip per measurement, empty where not computable", async () => {
+  it("one row per clip per measurement, at the screen's precision (0.1°), empty where not computable", async () => {
     const res = await call(fitter, "GET", `/api/fittings/${w.own.fitting.id}/csv`);
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("text/csv; charset=utf-8");
@@ -37,9 +37,17 @@ describe("GET /api/fittings/{id}/csv", () => {
     expect(lines.slice(1)).toEqual([
       `${f},1,Baseline,${clips[0]!.id},overhead,2026-01-01T10:00:00.000Z,face_angle_impact,-0.5,,deg,derived`,
       `${f},1,Baseline,${clips[0]!.id},overhead,2026-01-01T10:00:00.000Z,path,,,deg,derived`,
-      `${f},1,Baseline,${clips[1]!.id},overhead,2026-01-01T10:01:00.000Z,face_angle_impact,1.25,,deg,derived`,
-      `${f},2,"Blade, heavy",${clips[2]!.id},overhead,2026-01-01T11:00:00.000Z,start_direction,0.75,,deg,derived`,
+      `${f},1,Baseline,${clips[1]!.id},overhead,2026-01-01T10:01:00.000Z,face_angle_impact,1.3,,deg,derived`,
+      `${f},2,"Blade, heavy",${clips[2]!.id},overhead,2026-01-01T11:00:00.000Z,start_direction,0.8,,deg,derived`,
     ]);
+  });
+  it("the wide layout: one row per putt", async () => {
+    const res = await call(fitter, "GET", `/api/fittings/${w.own.fitting.id}/csv?layout=wide`);
+    expect(res.status).toBe(200);
+    const lines = (res.body as string).trimEnd().split("\r\n");
+    expect(lines[0]).toBe("fitting_id,build_position,build_label,clip_id,view,clip_recorded_at,face_angle_impact_deg,face_angle_impact_deg_se,path_deg,path_deg_se,start_direction_deg,start_direction_deg_se");
+    expect(lines).toHaveLength(4);
+    expect(lines[1]).toContain(`${clips[0]!.id},overhead,2026-01-01T10:00:00.000Z,-0.5,,,,,`);
   });
 });
 

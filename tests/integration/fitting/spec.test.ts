@@ -5,12 +5,7 @@ import { call, signIn } from "../../support/http";
 import { makeWorld, PASSWORD, type World } from "../../support/world";
 import { addMeasuredClips, mailTo } from "./helpers";
 
-/** The text of an uncompressed pdfkit PDF: each TJ array's hex strings (WinAnsi codes) joined, one line per array. */
-function pdfText(pdf: Buffer): string {
-  return [...pdf.toString("latin1").matchAll(/\[([^\]]*)\] TJ/g)]
-    .map((m) => [...m[1]!.matchAll(/<([0-9a-f]*)>/g)].map((h) => Buffer.from(h[1]!, "hex").toString("latin1")).join(""))
-    .join("\n");
-}
+import { pdftotext } from "../../support/pdf";
 
 let w: World;
 let fitter: { cookie: string };
@@ -22,7 +17,9 @@ beforeAll(async () => {
   fitter = { cookie: (await signIn(w.fitter.email, PASSWORD)).cookie! };
   golfer = { cookie: (await signIn(w.own.account.email, PASSWORD)).cookie! };
   await call(fitter, "PATCH", `/api/builds/${w.own.build.id}`, { headModel: "Mallet M2", neckStyle: "plumber", lengthIn: 34, lieDeg: 70, loftDeg: 3, headMassG: 355, gripName: "Pistol 60", gripMassG: 60, shaftMassG: 110, designShaftLeanDeg: 2, gripMaxWidthIn: 1.76 });
-  await addMeasuredClips(w, w.own.build, [0.3, -0.2, 0.1, 0].map((v) => ({ face_angle_impact: v, start_direction: v })));
+  // Start directions −0.3, −0.8, −0.5, −0.8: mean −2.4 / 4 = −0.6°.
+  const starts = [-0.3, -0.8, -0.5, -0.8];
+  await addMeasuredClips(w, w.own.build, [0.3, -0.2, 0.1, 0].map((v, i) => ({ face_angle_impact: v, start_direction: starts[i]! })));
   const issued = await call(fitter, "POST", `/api/fittings/${w.own.fitting.id}/specs`, { buildId: w.own.build.id, notes: "Keep the flat side up", buildShop: { gripOrientation: "flat side up", finishNotes: "black" } });
   expect(issued.status).toBe(201);
   first = issued.body.spec;
@@ -43,13 +40,18 @@ describe("issuing a spec", () => {
     expect((first.data.warnings as { field: string }[]).map((x) => x.field)).toEqual(["gripMaxWidthIn"]);
   });
 
-  it("the PDF: application/pdf, starts with %PDF, carries the golfer's name", async () => {
+  it("the PDF as Debian's pdftotext reads it: the golfer, the build shop, a true \u2212 (−0.6°), the studio, no stray quote marks", async () => {
     const res = await fetch(`${process.env.TEST_BASE_URL}/api/specs/${first.id}/pdf?compress=0`, { headers: { cookie: fitter.cookie } });
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("application/pdf");
     const bytes = Buffer.from(await res.arrayBuffer());
     expect(bytes.subarray(0, 5).toString("latin1")).toBe("%PDF-");
-    const text = pdfText(bytes);
+    const text = await pdftotext(bytes);
+    expect(text).toContain("mean \u22120.6°");
+    expect(text).toContain(w.studioA.name);
+    expect(text).not.toMatch(/["\u201c\u201d]/);
+    // Label and value on one line, in two columns.
+    expect(text).toMatch(/Head {2,}Mallet M2/);
     expect(text).toContain(w.own.golfer.name);
     expect(text).toContain("Mallet M2");
     expect(text).toContain("flat side up");

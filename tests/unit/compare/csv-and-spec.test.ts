@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { csvText, measurementsCsv, MEASUREMENT_CSV_HEADER } from "@/lib/compare/csv";
+import { csvText, measurementsCsv, measurementsCsvWide, MEASUREMENT_CSV_HEADER } from "@/lib/compare/csv";
 import { freezeSpec, type SpecBuild } from "@/lib/compare/spec-data";
 import { specLines } from "@/lib/compare/spec-lines";
 
@@ -9,15 +9,31 @@ describe("measurements CSV (RFC 4180)", () => {
     const text = measurementsCsv([row, { ...row, key: "path", value: null }]);
     expect(text.split("\r\n")).toEqual([
       "fitting_id,build_position,build_label,clip_id,view,clip_recorded_at,key,value,uncertainty,unit,method",
-      'f1,1,"Blade, ""heavy""",c1,overhead,2026-01-01T10:00:00.000Z,face_angle_impact,-0.75,,deg,derived',
+      'f1,1,"Blade, ""heavy""",c1,overhead,2026-01-01T10:00:00.000Z,face_angle_impact,-0.8,,deg,derived',
       "f1,1,\"Blade, \"\"heavy\"\"\",c1,overhead,2026-01-01T10:00:00.000Z,path,,,deg,derived",
       "",
     ]);
     expect(MEASUREMENT_CSV_HEADER.join(",")).toBe("fitting_id,build_position,build_label,clip_id,view,clip_recorded_at,key,value,uncertainty,unit,method");
   });
-  it("the uncertainty (one standard error) sits right after the value, at full precision", () => {
+  it("the uncertainty (one standard error) sits right after the value, both at the screen's precision (0.1°)", () => {
     const line = measurementsCsv([{ ...row, value: 1.4, uncertainty: 0.3125, method: "tracked" }]).split("\r\n")[1];
-    expect(line).toBe('f1,1,"Blade, ""heavy""",c1,overhead,2026-01-01T10:00:00.000Z,face_angle_impact,1.4,0.3125,deg,tracked');
+    expect(line).toBe('f1,1,"Blade, ""heavy""",c1,overhead,2026-01-01T10:00:00.000Z,face_angle_impact,1.4,0.3,deg,tracked');
+    // −0.04° rounds to 0.0 (never "-0.0"); an uncertainty of 0.02° is written 0.1, never a claimed 0.0.
+    const tiny = measurementsCsv([{ ...row, value: -0.04, uncertainty: 0.02 }]).split("\r\n")[1];
+    expect(tiny).toContain("face_angle_impact,0.0,0.1,deg");
+  });
+  it("the wide layout: one row per putt, a value and an uncertainty column per measurement", () => {
+    const text = measurementsCsvWide([
+      { ...row, value: -0.75, uncertainty: 0.31 },
+      { ...row, key: "ball_speed", unit: "m/s", value: 1.8349, uncertainty: 0.012 },
+      { ...row, clipId: "c2", value: 0.2 },
+    ]);
+    expect(text.split("\r\n")).toEqual([
+      "fitting_id,build_position,build_label,clip_id,view,clip_recorded_at,face_angle_impact_deg,face_angle_impact_deg_se,ball_speed_m_s,ball_speed_m_s_se",
+      'f1,1,"Blade, ""heavy""",c1,overhead,2026-01-01T10:00:00.000Z,-0.8,0.3,1.83,0.01',
+      'f1,1,"Blade, ""heavy""",c2,overhead,2026-01-01T10:00:00.000Z,0.2,,,',
+      "",
+    ]);
   });
   it("a text cell that would run as a spreadsheet formula is defused (OWASP CSV injection)", () => {
     expect(csvText("=HYPERLINK(1)")).toBe("'=HYPERLINK(1)");
@@ -59,6 +75,6 @@ describe("freezing a spec", () => {
   });
   it("a spec issued before the grip fields existed prints no rows for them", () => {
     const shop = specLines(freezeSpec(input)).sections.find((x) => x.title === "Build shop")!.rows.map(([label]) => label);
-    expect(shop).toEqual(["Head", "Neck", "Length", "Lie", "Loft", "Grip", "Grip orientation", "Head mass", "Swing weight", "Finish notes"]);
+    expect(shop).toEqual(["Head", "Neck", "Length", "Lie", "Loft", "Offset", "Toe hang", "Grip", "Grip mass", "Grip orientation", "Head mass", "Shaft mass", "Balance point", "Swing weight", "Alignment aid", "Finish notes"]);
   });
 });

@@ -1,10 +1,12 @@
 // The spec carries each mean with its ± (standard error of the mean) and a putt's own ±, and its
-// window as a range; the PDF sets only characters its built-in font has. Values written out by hand.
+// window as a range; the PDF embeds its font, so Debian's pdftotext reads back the true minus, ° and ±
+// in their columns. Values written out by hand.
 import { describe, expect, it } from "vitest";
 import type { BuildComparison } from "@/lib/compare/compare";
 import { freezeSpec, type SpecBuild } from "@/lib/compare/spec-data";
 import { specLines } from "@/lib/compare/spec-lines";
-import { pdfText, specPdf } from "@/lib/server/pdf/spec-pdf";
+import { specPdf } from "@/lib/server/pdf/spec-pdf";
+import { pdftotext } from "../../support/pdf";
 
 const build: SpecBuild = {
   label: "Blade 34", headModel: "Blade B1", neckStyle: "plumber", lengthIn: 34, lieDeg: 70, loftDeg: 3, offsetIn: null, toeHang: "slight",
@@ -43,14 +45,23 @@ describe("the spec's measurements with their precision", () => {
   });
 });
 
-describe("the spec PDF's text", () => {
-  it("a true minus becomes a hyphen-minus; ± and ° stay (both are in Helvetica's WinAnsi set)", () => {
-    expect(pdfText("\u22121° to +1° ±0.3°")).toBe("-1° to +1° ±0.3°");
+describe("the spec PDF as pdftotext reads it (Debian poppler-utils)", () => {
+  it("the true minus, ° and ± print as themselves, label and value on one line in two columns", async () => {
+    const text = await pdftotext(await specPdf(freezeSpec(input)));
+    expect(text).toContain("\u22120.3° ±0.3°");
+    expect(text).toContain("(\u22121° to +1°)");
+    expect(text).toMatch(/Face angle at impact {2,}mean \u22120\.3°/);
+    expect(text).toMatch(/Toe hang {2,}slight/);
+    expect(text).toContain("Studio");
+    expect(text).not.toMatch(/["\u201c\u201d]/);
   });
-  it("the PDF holds the ± line in WinAnsi bytes: ± is 0xB1, ° is 0xB0, minus is 0x2D", async () => {
-    const pdf = (await specPdf(freezeSpec(input), { compress: false })).toString("latin1");
-    // pdfkit writes text as hex strings: "-0.3° ±0.3°" → 2d 30 2e 33 b0 20 b1 30 2e 33 b0.
-    expect(pdf.toLowerCase()).toContain("2d302e33b020b1302e33b0");
-    expect(pdf.toLowerCase()).not.toContain("2212302e33");
+  it("a long value wraps inside its column instead of running off the page", async () => {
+    const long = "Grip flat side square to the face, label up, two wraps of tape under the top hand, " .repeat(3);
+    const text = await pdftotext(await specPdf(freezeSpec({ ...input, notes: long })));
+    const lines = text.split("\n").filter((l) => /tape|wraps|label up/.test(l));
+    expect(lines.length).toBeGreaterThan(2);
+    // Every wrapped line starts in the value column, right of the labels.
+    const column = lines[0]!.search(/\S/) === 0 ? lines[0]!.indexOf("Grip") : lines[0]!.search(/\S/);
+    for (const l of lines.slice(1)) expect(l.search(/\S/)).toBe(column);
   });
 });

@@ -8,6 +8,7 @@ import { BuildForm } from "@/components/fittings/build-form";
 import { BuildsBoard } from "@/components/fittings/builds-board";
 import { SessionPanel } from "@/components/session/session-panel";
 import { StudioScreenLink } from "@/components/session/studio-screen-link";
+import { FittingStatus } from "@/components/fittings/fitting-status";
 import { IssueSpecForm } from "@/components/specs/issue-spec-form";
 import { requirePageActor } from "@/lib/server/page-actor";
 import { bookingOfFitting } from "@/lib/server/dal/bookings";
@@ -29,9 +30,13 @@ export default async function FittingPage({ params }: { params: Promise<{ id: st
           <p className="text-label text-slate-600"><Link href={`/studio/golfers/${golfer.id}`}>{golfer.name}</Link> /</p>
           <h1 className="text-title">Fitting of {fitting.scheduledAt.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })}</h1>
           <p className="text-slate-600">{golfer.handedness}-handed · video consent {consentConfirmed ? "recorded" : "not recorded"}</p>
+          <FittingStatus fittingId={fitting.id} status={fitting.status} canEdit={staff} />
           <FittingFee booking={booking} />
         </div>
-        <a className="btn-quiet" href={`/api/fittings/${fitting.id}/csv`} download>Measurements (CSV)</a>
+        <div className="flex gap-2">
+          <a className="btn-quiet" href={`/api/fittings/${fitting.id}/csv`} download>Measurements (CSV, one row each)</a>
+          <a className="btn-quiet" href={`/api/fittings/${fitting.id}/csv?layout=wide`} download>CSV, one row per putt</a>
+        </div>
       </header>
 
       <section aria-labelledby="session-heading" className="flex flex-col gap-4">
@@ -56,7 +61,7 @@ export default async function FittingPage({ params }: { params: Promise<{ id: st
       <section aria-labelledby="clips-heading" className="flex flex-col gap-4">
         <h2 id="clips-heading" className="text-title">Clips</h2>
         {staff && <ClipUploader fittingId={fitting.id} builds={builds.map((b) => ({ id: b.id, label: b.label }))} consentConfirmed={consentConfirmed} cameraFps={settings.cameraFps} />}
-        <ClipList fittingId={fitting.id} />
+        <ClipList fittingId={fitting.id} builds={builds.map((b) => ({ id: b.id, label: b.label }))} />
       </section>
 
       <section aria-labelledby="compare-heading" className="flex flex-col gap-4">
